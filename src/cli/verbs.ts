@@ -1,0 +1,4 @@
+// The registry of CLI verbs. Each verb lives in its own file under src/cli/verbs/; add one line here.
+import type { Verb } from './verb.ts';
+
+export const VERBS: readonly Verb[] = [];

@@ -1,0 +1,15 @@
+import { defineConfig } from 'vite';
+
+// One config for the page (vite) and the tests (vitest). The test tree is split by kind;
+// `npm test` runs unit, reference and e2e through tests/tools/run-tests.mjs.
+export default defineConfig({
+  server: { host: '127.0.0.1', port: 5173, strictPort: false },
+  build: { target: 'es2022', outDir: 'dist' },
+  worker: { format: 'es' },
+  test: {
+    include: ['tests/{unit,reference,e2e}/**/*.test.ts'],
+    testTimeout: 60_000,
+    hookTimeout: 120_000,
+    pool: 'forks',
+  },
+});
