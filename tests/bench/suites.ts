@@ -1,0 +1,4 @@
+// Every benchmark suite, in the order `npm run bench` runs them. Add one line per suite.
+import type { BenchSuite } from './bench.ts';
+
+export const SUITES: BenchSuite[] = [];
