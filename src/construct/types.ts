@@ -1,0 +1,175 @@
+// The data model of a construction: what a scene file stores and what the canvas draws.
+//
+// A construction is a list of objects (curves, points, lines, checks). Each object has
+//   - an `id` (unique in the construction, never reused after deletion; e.g. "p7"),
+//   - a `label` shown on the canvas and in the sidebar (free text, e.g. "P", "O", "E"),
+//   - a `style` (colour, visibility, label visibility; stroke pattern for curves and lines),
+//   - its `construction`: a `kind` naming how it is built, the ids of its `parents` in a fixed order, and
+//     exact `params` as strings (rationals "-17/4", points "X:Y:Z", integers "5", equations as typed).
+//     Never floats: a scene file reproduces every value exactly.
+// That part is plain JSON (`ConstructionDoc`). The computed values (`ObjectValue`) are not stored: they
+// are recomputed from the parents in order, each with a status
+//   exact       — a point of P^2(Q), a line or curve with integer coefficients, a decided check;
+//   algebraic   — a real point with algebraic coordinates (defining polynomial + isolating interval),
+//                 refinable to any precision, not rational;
+//   approximate — floats only, e.g. everything depending on a free point while it is being dragged.
+// A value that cannot be built (two equal points asked for their line) is an `ObjectFailure` with the
+// message in words; the object stays in the construction and comes back when its parents allow it.
+//
+// Canonical form: `objects` is in construction order — every parent appears before its children — and
+// ids are unique. `constructionValidate` (graph.ts) enforces both on load.
+import type { Form } from '../poly/form.ts';
+import type { Line, Point } from '../plane/point.ts';
+import type { Rational } from '../exact/rational.ts';
+
+export type ObjectId = string;
+
+/** What an object is, independent of how it was built. */
+export type ObjectType = 'curve' | 'point' | 'line' | 'check';
+
+export type Status = 'exact' | 'algebraic' | 'approximate';
+
+/** How an object is built. Each kind fixes its parents (by type and order) and its params. */
+export type ConstructionKind =
+  // curves
+  | 'curve-equation' //       parents []; params { equation } as typed ("y^2 = x^3 - 3x + 5"), degree 1..6
+  | 'conic-through-five' //   parents [5 points]
+  | 'cubic-through-nine' //   parents [9 points]
+  | 'pencil-member' //        parents [8 points]; params { member: "s:t" } — the member s·F1 + t·F2 of the pencil
+  // points
+  | 'point-free' //           parents []; params { at: "X:Y:Z" }
+  | 'point-on-curve' //       parents [curve]; params { at: "X:Y:Z" } (a rational point of the curve), or
+  //                          params { x: "rational", near: "rational" }: the real point of the curve on the
+  //                          vertical line at x whose ordinate is nearest `near` (algebraic in general)
+  | 'point-meet' //           parents [a, b] (line or curve each); params { index: "k" } — the k-th meet point
+  //                          in the order of `meetOrder` (graph.ts documents it)
+  | 'point-third' //          parents [curve, P, Q]: the third point P*Q of the chord (tangent when P = Q)
+  | 'point-sum' //            parents [curve, O, P, Q]: P + Q with base point O
+  | 'point-multiple' //       parents [curve, O, P]; params { n: "integer" }: nP with base point O
+  | 'point-negative' //       parents [curve, O, P]: −P with base point O
+  | 'point-ninth' //          parents [8 points]: the ninth base point of the pencil of cubics through them
+  | 'point-parameter' //      parents [curve]; params { at: "s:t" }: the point with parameter (s:t) of a
+  //                          nodal or cuspidal cubic's parametrisation through its singular point
+  // lines
+  | 'line-through-two' //     parents [P, Q]
+  | 'line-tangent' //         parents [curve, P]: the tangent at a smooth point P of the curve
+  | 'line-equation' //        parents []; params { at: "a:b:c" } — the line aX + bY + cZ = 0
+  // checks (each re-evaluated after every change)
+  | 'check-collinear' //      parents [3 or more points]
+  | 'check-concurrent' //     parents [3 or more lines]
+  | 'check-on-curve' //       parents [P, curve]
+  | 'check-equal' //          parents [P, Q]
+  | 'check-nine' //           parents [9 points]: do they form the base of a pencil of cubics?
+  | 'check-associative'; //   parents [curve, O, P, Q, R]: (P+Q)+R = P+(Q+R)
+
+export interface Construction {
+  readonly kind: ConstructionKind;
+  readonly parents: readonly ObjectId[];
+  readonly params: Readonly<Record<string, string>>;
+}
+
+export type StrokePattern = 'solid' | 'dashed' | 'dotted';
+
+export interface Style {
+  /** CSS colour, "#rrggbb". */
+  readonly colour: string;
+  readonly visible: boolean;
+  readonly showLabel: boolean;
+  /** Curves and lines only; points encode their status by shape instead. */
+  readonly stroke?: StrokePattern;
+  /** Stroke width in CSS pixels (curves and lines). */
+  readonly width?: number;
+}
+
+export interface ConstructionObject {
+  readonly id: ObjectId;
+  readonly type: ObjectType;
+  readonly label: string;
+  readonly style: Style;
+  readonly construction: Construction;
+  /** Set on helper objects a tool made on the way (the chord drawn by a sum); deleted with their owner. */
+  readonly helperOf?: ObjectId;
+}
+
+/** The serialisable construction: what a scene file holds (E8 wraps it with version and view). */
+export interface ConstructionDoc {
+  readonly objects: readonly ConstructionObject[];
+  /** The curve whose report the sidebar shows and on which point tools act by default. */
+  readonly activeCurve: ObjectId | null;
+  /** Next free id number: ids are `${prefix}${n}` and never reused. */
+  readonly nextId: number;
+}
+
+// ---- computed values (not serialised) ----
+
+/** A real algebraic number as E1's `RealAlgebraic` (src/exact/algebraic.ts): square-free primitive poly
+ * (coefficient of x^i at index i) and an isolating interval with exact endpoints. */
+export interface AlgebraicNumber {
+  readonly poly: readonly bigint[];
+  readonly lo: Rational;
+  readonly hi: Rational;
+}
+
+/** Floating approximation of a projective point, for drawing: affine (x, y) when finite, else a direction. */
+export interface PointApprox {
+  readonly x: number;
+  readonly y: number;
+  /** false for a point at infinity; (x, y) is then its direction. */
+  readonly finite: boolean;
+}
+
+export interface PointValue {
+  readonly type: 'point';
+  readonly status: Status;
+  /** Present when status = exact. */
+  readonly exact?: Point;
+  /** Present when status = algebraic: affine coordinates. */
+  readonly algebraic?: { readonly x: AlgebraicNumber | Rational; readonly y: AlgebraicNumber | Rational };
+  readonly approx: PointApprox;
+  /** Intersection multiplicity, for meet points. */
+  readonly multiplicity?: number;
+}
+
+export interface LineValue {
+  readonly type: 'line';
+  readonly status: Status;
+  readonly exact?: Line;
+  /** a, b, c of aX + bY + cZ = 0 in floats (always present). */
+  readonly approx: readonly [number, number, number];
+}
+
+export interface CurveValue {
+  readonly type: 'curve';
+  /** Curves are always exact: their coefficients come from exact parents, or the construction waits. */
+  readonly status: 'exact' | 'approximate';
+  readonly form: Form;
+  /** Float coefficients in the order of `form.coeffs`, for the tracer. */
+  readonly approx: readonly number[];
+}
+
+export type Verdict = 'holds' | 'fails' | 'undecided';
+
+export interface CheckValue {
+  readonly type: 'check';
+  readonly status: Status;
+  readonly verdict: Verdict;
+  /** The claim in words, e.g. "P, Q, R are collinear". */
+  readonly claim: string;
+  /** The exact certificate (a determinant, a residual, a point) as text; on algebraic data the
+   * precision used, e.g. "decided at 60 bits". */
+  readonly certificate: string;
+  /** A plain-words remark, e.g. on a special nine-point configuration. */
+  readonly remark?: string;
+}
+
+export interface ObjectFailure {
+  readonly type: 'failure';
+  readonly message: string;
+  /** The parent or param responsible, when known. */
+  readonly where: string;
+}
+
+export type ObjectValue = PointValue | LineValue | CurveValue | CheckValue | ObjectFailure;
+
+/** The computed side of a construction: one value per object id. */
+export type ValueMap = ReadonlyMap<ObjectId, ObjectValue>;
