@@ -1,0 +1,204 @@
+// Floating-point shadows of the constructions, for the live drag and for objects built from algebraic
+// points. Nothing here decides anything: values made here carry the status 'approximate' (or 'algebraic'
+// when they stand for a real algebraic object), and exact recomputation replaces them after a drop.
+//
+// Canonical form: a float point or line is a triple scaled to Euclidean length 1 (sign unfixed).
+import { formEvalFloat, formPartial, monomials, type Form } from '../poly/form.ts';
+import type { PointApprox } from './types.ts';
+
+export type F3 = readonly [number, number, number];
+
+export function f3Normalise(v: readonly number[]): F3 {
+  const n = Math.hypot(v[0], v[1], v[2]);
+  return n === 0 || !Number.isFinite(n) ? [0, 0, 0] : [v[0] / n, v[1] / n, v[2] / n];
+}
+
+export function f3Cross(a: F3, b: F3): F3 {
+  return f3Normalise([a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]]);
+}
+
+export function f3Dot(a: F3, b: F3): number {
+  return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+}
+
+export function f3IsZero(a: F3): boolean {
+  return a[0] === 0 && a[1] === 0 && a[2] === 0;
+}
+
+/** Relative size below which a float triple counts as zero (two points taken as equal, and so on). */
+export const FLOAT_ZERO = 1e-10;
+
+export function f3FromBig(t: readonly bigint[]): F3 {
+  // Scale by the largest entry first so that huge integers still give a unit vector.
+  const bits = Math.max(...t.map((x) => (x < 0n ? -x : x).toString(2).length));
+  const shift = BigInt(Math.max(0, bits - 60));
+  return f3Normalise(t.map((x) => Number(x >> shift) || Number(x) / 2 ** Number(shift)));
+}
+
+export function f3ToApprox(p: F3): PointApprox {
+  const scale = Math.max(Math.abs(p[0]), Math.abs(p[1]), 1e-300);
+  if (Math.abs(p[2]) <= 1e-12 * scale) return { x: p[0], y: p[1], finite: false };
+  return { x: p[0] / p[2], y: p[1] / p[2], finite: true };
+}
+
+export function f3FromApprox(a: PointApprox): F3 {
+  return a.finite ? f3Normalise([a.x, a.y, 1]) : f3Normalise([a.x, a.y, 0]);
+}
+
+const GRADIENTS = new WeakMap<Form, readonly [Form, Form, Form]>();
+
+function gradientForms(f: Form): readonly [Form, Form, Form] {
+  let g = GRADIENTS.get(f);
+  if (!g) {
+    g = [formPartial(f, 0), formPartial(f, 1), formPartial(f, 2)];
+    GRADIENTS.set(f, g);
+  }
+  return g;
+}
+
+export function formGradientFloat(f: Form, p: F3): F3 {
+  const g = gradientForms(f);
+  return [formEvalFloat(g[0], p[0], p[1], p[2]), formEvalFloat(g[1], p[0], p[1], p[2]), formEvalFloat(g[2], p[0], p[1], p[2])];
+}
+
+/** Third point of the line through P and Q on a cubic (tangent when P ≈ Q): R = (P·∇F(Q))P − (Q·∇F(P))Q,
+ * Silverman–Tate, ch. I (as in src/cubic/chord.ts, here in doubles). */
+export function cubicThirdFloat(f: Form, p: F3, q: F3): F3 {
+  if (f3IsZero(f3Cross(p, q)) || Math.hypot(...f3Cross(p, q)) < FLOAT_ZERO) return cubicTangentThirdFloat(f, p);
+  const a = f3Dot(p, formGradientFloat(f, q));
+  const b = f3Dot(q, formGradientFloat(f, p));
+  return f3Normalise([a * p[0] - b * q[0], a * p[1] - b * q[1], a * p[2] - b * q[2]]);
+}
+
+function cubicTangentThirdFloat(f: Form, p: F3): F3 {
+  const g = f3Normalise(formGradientFloat(f, p));
+  let d = f3Cross(g, p);
+  if (f3IsZero(d)) d = f3Cross(g, [1, 0, 0]);
+  const fd = formEvalFloat(f, d[0], d[1], d[2]);
+  const pd = f3Dot(p, formGradientFloat(f, d));
+  return f3Normalise([fd * p[0] - pd * d[0], fd * p[1] - pd * d[1], fd * p[2] - pd * d[2]]);
+}
+
+export function cubicSumFloat(f: Form, o: F3, p: F3, q: F3): F3 {
+  return cubicThirdFloat(f, o, cubicThirdFloat(f, p, q));
+}
+
+export function cubicNegativeFloat(f: Form, o: F3, p: F3): F3 {
+  return cubicThirdFloat(f, p, cubicThirdFloat(f, o, o));
+}
+
+/** nP by double-and-add in doubles; |n| is kept small by the callers (drawing only). */
+export function cubicMultipleFloat(f: Form, o: F3, p: F3, n: number): F3 {
+  let base = n < 0 ? cubicNegativeFloat(f, o, p) : p;
+  let k = Math.abs(n);
+  let acc: F3 = o;
+  while (k > 0) {
+    if (k & 1) acc = cubicSumFloat(f, o, acc, base);
+    k >>= 1;
+    if (k > 0) base = cubicSumFloat(f, o, base, base);
+  }
+  return acc;
+}
+
+/** The real points where a line meets a curve, in doubles (multiplicities not resolved). */
+export function lineCurveMeetFloat(f: Form, line: F3): F3[] {
+  const [p, q] = lineSpan(line);
+  // F(p + u q) as a polynomial in u, coefficient of u^i at index i.
+  const poly = new Array<number>(f.degree + 1).fill(0);
+  const m = monomials(f.degree);
+  for (let k = 0; k < m.length; k++) {
+    const c = Number(f.coeffs[k]);
+    if (c === 0) continue;
+    let term = [c];
+    for (let v = 0; v < 3; v++) for (let e = 0; e < m[k][v]; e++) term = polyMulLinear(term, p[v], q[v]);
+    term.forEach((t, i) => (poly[i] += t));
+  }
+  const out: F3[] = [];
+  const scale = Math.max(...poly.map(Math.abs));
+  let deg = poly.length - 1;
+  while (deg > 0 && Math.abs(poly[deg]) <= 1e-12 * scale) {
+    out.push(q); // a root at u = ∞ is the point q itself
+    deg--;
+  }
+  for (const u of polyRealRoots(poly.slice(0, deg + 1))) out.push(f3Normalise([p[0] + u * q[0], p[1] + u * q[1], p[2] + u * q[2]]));
+  return out;
+}
+
+function polyMulLinear(a: number[], c0: number, c1: number): number[] {
+  const out = new Array<number>(a.length + 1).fill(0);
+  a.forEach((x, i) => {
+    out[i] += x * c0;
+    out[i + 1] += x * c1;
+  });
+  return out;
+}
+
+/** Two points spanning a line, chosen away from the coordinate vectors the line nearly contains. */
+function lineSpan(l: F3): [F3, F3] {
+  const e: F3[] = [
+    [1, 0, 0],
+    [0, 1, 0],
+    [0, 0, 1],
+  ];
+  const c = e.map((v) => f3Cross(l, v)).map((v, i) => ({ v, n: Math.abs(l[i]) }));
+  c.sort((a, b) => a.n - b.n);
+  return [c[2].v, f3Cross(l, c[2].v)];
+}
+
+/** Real roots of a polynomial (coefficient of u^i at index i) by Durand–Kerner, then one Newton polish. */
+export function polyRealRoots(poly: readonly number[]): number[] {
+  const n = poly.length - 1;
+  if (n < 1) return [];
+  const lead = poly[n];
+  const a = poly.map((c) => c / lead);
+  const bound = 1 + Math.max(...a.slice(0, n).map(Math.abs));
+  // Start on a circle, off any symmetry axis (the usual Durand–Kerner start).
+  let z = Array.from({ length: n }, (_, k) => ({ re: 0.5 * bound * Math.cos(0.4 + (2 * Math.PI * k) / n), im: 0.5 * bound * Math.sin(0.4 + (2 * Math.PI * k) / n) }));
+  for (let it = 0; it < 200; it++) {
+    let moved = 0;
+    z = z.map((zi, i) => {
+      let num = { re: a[n], im: 0 }; // p(zi) by Horner in complex arithmetic
+      for (let k = n - 1; k >= 0; k--) num = { re: num.re * zi.re - num.im * zi.im + a[k], im: num.re * zi.im + num.im * zi.re };
+      let den = { re: 1, im: 0 };
+      z.forEach((zj, j) => {
+        if (j === i) return;
+        const d = { re: zi.re - zj.re, im: zi.im - zj.im };
+        den = { re: den.re * d.re - den.im * d.im, im: den.re * d.im + den.im * d.re };
+      });
+      const dd = den.re * den.re + den.im * den.im || 1e-300;
+      const q = { re: (num.re * den.re + num.im * den.im) / dd, im: (num.im * den.re - num.re * den.im) / dd };
+      moved = Math.max(moved, Math.hypot(q.re, q.im));
+      return { re: zi.re - q.re, im: zi.im - q.im };
+    });
+    if (moved < 1e-14 * bound) break;
+  }
+  return z.filter((w) => Math.abs(w.im) <= 1e-7 * Math.max(1, Math.hypot(w.re, w.im))).map((w) => newtonPolish(poly, w.re));
+}
+
+function newtonPolish(poly: readonly number[], x: number): number {
+  for (let it = 0; it < 3; it++) {
+    let v = 0;
+    let d = 0;
+    for (let k = poly.length - 1; k >= 0; k--) {
+      d = d * x + v;
+      v = v * x + poly[k];
+    }
+    if (d === 0) break;
+    x -= v / d;
+  }
+  return x;
+}
+
+/** Move an affine point onto the real curve F = 0 by Newton steps along the gradient (drag preview). */
+export function curveProjectFloat(f: Form, x: number, y: number): { x: number; y: number } | null {
+  for (let it = 0; it < 12; it++) {
+    const v = formEvalFloat(f, x, y, 1);
+    const g = formGradientFloat(f, [x, y, 1]);
+    const n2 = g[0] * g[0] + g[1] * g[1];
+    if (n2 === 0 || !Number.isFinite(n2)) return null;
+    x -= (v * g[0]) / n2;
+    y -= (v * g[1]) / n2;
+  }
+  const ok = Number.isFinite(x) && Number.isFinite(y);
+  return ok ? { x, y } : null;
+}
