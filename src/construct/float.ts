@@ -3,8 +3,14 @@
 // when they stand for a real algebraic object), and exact recomputation replaces them after a drop.
 //
 // Canonical form: a float point or line is a triple scaled to Euclidean length 1 (sign unfixed).
-import { formEvalFloat, formPartial, monomials, type Form } from '../poly/form.ts';
+import { monomialIndex, monomials, type Form } from '../poly/form.ts';
 import type { PointApprox } from './types.ts';
+
+/** A ternary form with float coefficients, in the monomial order of src/poly/form.ts. */
+export interface FloatForm {
+  readonly degree: number;
+  readonly coeffs: readonly number[];
+}
 
 export type F3 = readonly [number, number, number];
 
@@ -45,50 +51,81 @@ export function f3FromApprox(a: PointApprox): F3 {
   return a.finite ? f3Normalise([a.x, a.y, 1]) : f3Normalise([a.x, a.y, 0]);
 }
 
-const GRADIENTS = new WeakMap<Form, readonly [Form, Form, Form]>();
+const FLOATS = new WeakMap<Form, FloatForm>();
 
-function gradientForms(f: Form): readonly [Form, Form, Form] {
-  let g = GRADIENTS.get(f);
+/** The float shadow of an exact form, made once per form object. */
+export function formToFloat(f: Form): FloatForm {
+  let g = FLOATS.get(f);
   if (!g) {
-    g = [formPartial(f, 0), formPartial(f, 1), formPartial(f, 2)];
-    GRADIENTS.set(f, g);
+    const bits = Math.max(...f.coeffs.map((c) => (c < 0n ? -c : c).toString(2).length));
+    const shift = BigInt(Math.max(0, bits - 60)); // keep huge coefficients finite; the curve is unchanged
+    g = { degree: f.degree, coeffs: f.coeffs.map((c) => Number(c >> shift)) };
+    FLOATS.set(f, g);
   }
   return g;
 }
 
-export function formGradientFloat(f: Form, p: F3): F3 {
-  const g = gradientForms(f);
-  return [formEvalFloat(g[0], p[0], p[1], p[2]), formEvalFloat(g[1], p[0], p[1], p[2]), formEvalFloat(g[2], p[0], p[1], p[2])];
+export function floatFormEval(f: FloatForm, x: number, y: number, z: number): number {
+  const m = monomials(f.degree);
+  let s = 0;
+  for (let k = 0; k < m.length; k++) {
+    const c = f.coeffs[k];
+    if (c !== 0) s += c * x ** m[k][0] * y ** m[k][1] * z ** m[k][2];
+  }
+  return s;
+}
+
+const GRADIENTS = new WeakMap<FloatForm, readonly [FloatForm, FloatForm, FloatForm]>();
+
+function floatPartial(f: FloatForm, v: 0 | 1 | 2): FloatForm {
+  const d = f.degree;
+  const out = new Array<number>(((d) * (d + 1)) / 2).fill(0);
+  const m = monomials(d);
+  for (let k = 0; k < m.length; k++) {
+    const e = m[k][v];
+    if (f.coeffs[k] === 0 || e === 0) continue;
+    out[monomialIndex(d - 1, m[k][0] - (v === 0 ? 1 : 0), m[k][1] - (v === 1 ? 1 : 0))] += f.coeffs[k] * e;
+  }
+  return { degree: d - 1, coeffs: out };
+}
+
+export function formGradientFloat(f: FloatForm, p: F3): F3 {
+  let g = GRADIENTS.get(f);
+  if (!g) {
+    g = [floatPartial(f, 0), floatPartial(f, 1), floatPartial(f, 2)];
+    GRADIENTS.set(f, g);
+  }
+  return [floatFormEval(g[0], p[0], p[1], p[2]), floatFormEval(g[1], p[0], p[1], p[2]), floatFormEval(g[2], p[0], p[1], p[2])];
 }
 
 /** Third point of the line through P and Q on a cubic (tangent when P ≈ Q): R = (P·∇F(Q))P − (Q·∇F(P))Q,
  * Silverman–Tate, ch. I (as in src/cubic/chord.ts, here in doubles). */
-export function cubicThirdFloat(f: Form, p: F3, q: F3): F3 {
+export function cubicThirdFloat(f: FloatForm, p: F3, q: F3): F3 {
   if (f3IsZero(f3Cross(p, q)) || Math.hypot(...f3Cross(p, q)) < FLOAT_ZERO) return cubicTangentThirdFloat(f, p);
   const a = f3Dot(p, formGradientFloat(f, q));
   const b = f3Dot(q, formGradientFloat(f, p));
   return f3Normalise([a * p[0] - b * q[0], a * p[1] - b * q[1], a * p[2] - b * q[2]]);
 }
 
-function cubicTangentThirdFloat(f: Form, p: F3): F3 {
+function cubicTangentThirdFloat(f: FloatForm, p: F3): F3 {
   const g = f3Normalise(formGradientFloat(f, p));
   let d = f3Cross(g, p);
   if (f3IsZero(d)) d = f3Cross(g, [1, 0, 0]);
-  const fd = formEvalFloat(f, d[0], d[1], d[2]);
+  const fd = floatFormEval(f, d[0], d[1], d[2]);
   const pd = f3Dot(p, formGradientFloat(f, d));
   return f3Normalise([fd * p[0] - pd * d[0], fd * p[1] - pd * d[1], fd * p[2] - pd * d[2]]);
 }
 
-export function cubicSumFloat(f: Form, o: F3, p: F3, q: F3): F3 {
+export function cubicSumFloat(f: FloatForm, o: F3, p: F3, q: F3): F3 {
   return cubicThirdFloat(f, o, cubicThirdFloat(f, p, q));
 }
 
-export function cubicNegativeFloat(f: Form, o: F3, p: F3): F3 {
+export function cubicNegativeFloat(f: FloatForm, o: F3, p: F3): F3 {
   return cubicThirdFloat(f, p, cubicThirdFloat(f, o, o));
 }
 
 /** nP by double-and-add in doubles; |n| is kept small by the callers (drawing only). */
-export function cubicMultipleFloat(f: Form, o: F3, p: F3, n: number): F3 {
+export function cubicMultipleFloat(f: FloatForm, o: F3, p: F3, n: number): F3 {
   let base = n < 0 ? cubicNegativeFloat(f, o, p) : p;
   let k = Math.abs(n);
   let acc: F3 = o;
@@ -101,13 +138,13 @@ export function cubicMultipleFloat(f: Form, o: F3, p: F3, n: number): F3 {
 }
 
 /** The real points where a line meets a curve, in doubles (multiplicities not resolved). */
-export function lineCurveMeetFloat(f: Form, line: F3): F3[] {
+export function lineCurveMeetFloat(f: FloatForm, line: F3): F3[] {
   const [p, q] = lineSpan(line);
   // F(p + u q) as a polynomial in u, coefficient of u^i at index i.
   const poly = new Array<number>(f.degree + 1).fill(0);
   const m = monomials(f.degree);
   for (let k = 0; k < m.length; k++) {
-    const c = Number(f.coeffs[k]);
+    const c = f.coeffs[k];
     if (c === 0) continue;
     let term = [c];
     for (let v = 0; v < 3; v++) for (let e = 0; e < m[k][v]; e++) term = polyMulLinear(term, p[v], q[v]);
@@ -190,9 +227,9 @@ function newtonPolish(poly: readonly number[], x: number): number {
 }
 
 /** Move an affine point onto the real curve F = 0 by Newton steps along the gradient (drag preview). */
-export function curveProjectFloat(f: Form, x: number, y: number): { x: number; y: number } | null {
+export function curveProjectFloat(f: FloatForm, x: number, y: number): { x: number; y: number } | null {
   for (let it = 0; it < 12; it++) {
-    const v = formEvalFloat(f, x, y, 1);
+    const v = floatFormEval(f, x, y, 1);
     const g = formGradientFloat(f, [x, y, 1]);
     const n2 = g[0] * g[0] + g[1] * g[1];
     if (n2 === 0 || !Number.isFinite(n2)) return null;
@@ -201,4 +238,34 @@ export function curveProjectFloat(f: Form, x: number, y: number): { x: number; y
   }
   const ok = Number.isFinite(x) && Number.isFinite(y);
   return ok ? { x, y } : null;
+}
+
+/** The curve of degree d through n = (d+1)(d+2)/2 − 1 points in doubles: the kernel vector of the n × (n+1)
+ * monomial matrix by Gaussian elimination with partial pivoting. Null when the points are (nearly) special. */
+export function curveThroughPointsFloat(d: number, points: readonly F3[]): FloatForm | null {
+  const m = monomials(d);
+  const rows = points.map((p) => m.map((e) => p[0] ** e[0] * p[1] ** e[1] * p[2] ** e[2]));
+  const n = m.length;
+  const pivots: number[] = [];
+  let r = 0;
+  for (let c = 0; c < n && r < rows.length; c++) {
+    let best = r;
+    for (let i = r + 1; i < rows.length; i++) if (Math.abs(rows[i][c]) > Math.abs(rows[best][c])) best = i;
+    if (Math.abs(rows[best][c]) < 1e-12) continue;
+    [rows[r], rows[best]] = [rows[best], rows[r]];
+    for (let i = 0; i < rows.length; i++) {
+      if (i === r) continue;
+      const k = rows[i][c] / rows[r][c];
+      if (k !== 0) for (let j = c; j < n; j++) rows[i][j] -= k * rows[r][j];
+    }
+    pivots.push(c);
+    r++;
+  }
+  if (pivots.length !== n - 1) return null;
+  const free = m.findIndex((_, c) => !pivots.includes(c));
+  const v = new Array<number>(n).fill(0);
+  v[free] = 1;
+  pivots.forEach((c, i) => (v[c] = -rows[i][free] / rows[i][c]));
+  const scale = Math.max(...v.map(Math.abs));
+  return { degree: d, coeffs: v.map((x) => x / scale) };
 }

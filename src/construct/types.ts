@@ -140,9 +140,10 @@ export interface LineValue {
 
 export interface CurveValue {
   readonly type: 'curve';
-  /** Curves are always exact: their coefficients come from exact parents, or the construction waits. */
-  readonly status: 'exact' | 'approximate';
-  readonly form: Form;
+  /** Exact when built from exact parents; approximate while a parent point is dragged (or algebraic). */
+  readonly status: Status;
+  /** Present when status = exact: the primitive integer form. */
+  readonly form?: Form;
   /** Float coefficients in the order of `form.coeffs`, for the tracer. */
   readonly approx: readonly number[];
 }

@@ -1,7 +1,7 @@
 // Float shadows used while dragging: compared with exact values computed by hand.
 import { describe, expect, it } from 'vitest';
-import { cubicThirdFloat, lineCurveMeetFloat, polyRealRoots, f3ToApprox, curveProjectFloat } from '../../../src/construct/float.ts';
-import { formFromCoeffs, formEval, monomialIndex, formZero } from '../../../src/poly/form.ts';
+import { formToFloat, curveThroughPointsFloat, floatFormEval, cubicThirdFloat, lineCurveMeetFloat, polyRealRoots, f3ToApprox, curveProjectFloat } from '../../../src/construct/float.ts';
+import { formFromCoeffs, monomialIndex, formZero } from '../../../src/poly/form.ts';
 
 // y^2 z = x^3 - 2 x z^2 + 3 z^3, a curve of our own.
 function curve() {
@@ -10,7 +10,7 @@ function curve() {
   c[monomialIndex(3, 0, 2)] = -1n;
   c[monomialIndex(3, 1, 0)] = -2n;
   c[monomialIndex(3, 0, 0)] = 3n;
-  return formFromCoeffs(3, c);
+  return formToFloat(formFromCoeffs(3, c));
 }
 
 describe('float shadows', () => {
@@ -22,8 +22,7 @@ describe('float shadows', () => {
   });
   it('the vertical chord through (-1, ±2) meets y^2 = x^3 - 2x + 3 again at infinity', () => {
     const f = curve();
-    expect(formEval(f, [-1n, 2n, 1n])).toBe(0n);
-    expect(formEval(f, [-1n, -2n, 1n])).toBe(0n);
+    expect(floatFormEval(f, -1, 2, 1)).toBe(0);
     // The vertical chord through (-1, 2) and (-1, -2) meets the curve again at infinity (0:1:0).
     const r = f3ToApprox(cubicThirdFloat(f, [-1, 2, 1], [-1, -2, 1]));
     expect(r.finite).toBe(false);
@@ -42,5 +41,13 @@ describe('float shadows', () => {
     const f = curve();
     const p = curveProjectFloat(f, -1.05, 2.1)!;
     expect(Math.abs(p.y * p.y - (p.x ** 3 - 2 * p.x + 3))).toBeLessThan(1e-9);
+  });
+  it('puts a conic through five points', () => {
+    // x^2 + y^2 = 25 through five of its rational points.
+    const pts = [[3, 4, 1], [5, 0, 1], [0, -5, 1], [-4, 3, 1], [-3, -4, 1]] as const;
+    const c = curveThroughPointsFloat(2, pts)!;
+    const s = c.coeffs[0];
+    // order X^2, XY, XZ, Y^2, YZ, Z^2
+    expect(c.coeffs.map((x) => x / s)).toEqual([1, 0, 0, 1, 0, -25].map((x) => expect.closeTo(x, 9)));
   });
 });
