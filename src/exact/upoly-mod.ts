@@ -1,0 +1,116 @@
+// Univariate polynomials over a small prime field F_l, used only as cheap exact filters: "the integer gcd is
+// 1" and "at most N rational roots" are proved by one computation modulo a good prime.
+//
+// Canonical form: `ModPoly = number[]`, coefficient of x^i at index i, each in [0, l), trimmed. Primes are
+// below 2^26 so every product of two residues is below 2^52 and exact in a double.
+
+export type ModPoly = number[];
+
+/** Primes just below 2^26, tried in order; any prime dividing a leading coefficient is skipped by callers. */
+export const FILTER_PRIMES: readonly number[] = [
+  67108859, 67108837, 67108819, 67108777, 67108763, 67108757, 67108753, 67108747, 67108739, 67108729,
+  67108721, 67108709, 67108693, 67108669, 67108667, 67108661,
+];
+
+function trim(p: number[]): ModPoly {
+  let n = p.length;
+  while (n > 0 && p[n - 1] === 0) n--;
+  p.length = n;
+  return p;
+}
+
+function mulMod(a: number, b: number, l: number): number {
+  return (a * b) % l;
+}
+
+/** a^-1 mod l by the extended Euclidean algorithm; assumes gcd(a, l) = 1. */
+function invMod(a: number, l: number): number {
+  let [r0, r1] = [a, l];
+  let [s0, s1] = [1, 0];
+  while (r1 !== 0) {
+    const q = Math.floor(r0 / r1);
+    [r0, r1] = [r1, r0 - q * r1];
+    [s0, s1] = [s1, s0 - q * s1];
+  }
+  return ((s0 % l) + l) % l;
+}
+
+export function modPolyReduce(p: readonly bigint[], l: number): ModPoly {
+  const L = BigInt(l);
+  return trim(
+    p.map((c) => {
+      const r = Number(c % L);
+      return r < 0 ? r + l : r;
+    }),
+  );
+}
+
+function makeMonic(p: ModPoly, l: number): ModPoly {
+  const inv = invMod(p[p.length - 1], l);
+  return p.map((c) => mulMod(c, inv, l));
+}
+
+/** Remainder of a by b (b non-zero). */
+export function modPolyRem(a: readonly number[], b: readonly number[], l: number): ModPoly {
+  const r = a.slice();
+  const db = b.length - 1;
+  const inv = invMod(b[db], l);
+  for (let k = r.length - 1; k >= db; k--) {
+    const c = mulMod(r[k], inv, l);
+    if (c === 0) continue;
+    for (let j = 0; j <= db; j++) r[k - db + j] = (r[k - db + j] - mulMod(c, b[j], l) + l) % l;
+  }
+  r.length = Math.min(r.length, db);
+  return trim(r);
+}
+
+/** Monic gcd ([] when both are zero). */
+export function modPolyGcd(a: readonly number[], b: readonly number[], l: number): ModPoly {
+  let x = a.slice();
+  let y = b.slice();
+  while (y.length > 0) {
+    const r = modPolyRem(x, y, l);
+    x = y;
+    y = r;
+  }
+  return x.length === 0 ? x : makeMonic(x, l);
+}
+
+export function modPolyDerivative(p: readonly number[], l: number): ModPoly {
+  const r: number[] = [];
+  for (let i = 1; i < p.length; i++) r.push(mulMod(i % l, p[i], l));
+  return trim(r);
+}
+
+function modPolyMulRem(a: readonly number[], b: readonly number[], m: readonly number[], l: number): ModPoly {
+  if (a.length === 0 || b.length === 0) return [];
+  const r = new Array<number>(a.length + b.length - 1).fill(0);
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] === 0) continue;
+    for (let j = 0; j < b.length; j++) r[i + j] = (r[i + j] + mulMod(a[i], b[j], l)) % l;
+  }
+  return modPolyRem(trim(r), m, l);
+}
+
+/**
+ * Number of distinct roots of p in F_l: deg gcd(x^l - x, p) (common practice; Cohen, "A Course in
+ * Computational Algebraic Number Theory", §3.4.1). Assumes deg p >= 1.
+ */
+export function modPolyRootCount(p: readonly number[], l: number): number {
+  const f = makeMonic(p.slice(), l);
+  if (f.length === 2) return 1;
+  // x^l mod f by square-and-multiply.
+  let result: ModPoly = [1];
+  let base: ModPoly = modPolyRem([0, 1], f, l);
+  let e = l;
+  while (e > 0) {
+    if (e & 1) result = modPolyMulRem(result, base, f, l);
+    e = Math.floor(e / 2);
+    if (e > 0) base = modPolyMulRem(base, base, f, l);
+  }
+  const xl = result.slice();
+  while (xl.length < 2) xl.push(0);
+  xl[1] = (xl[1] - 1 + l) % l;
+  const g = modPolyGcd(f, trim(xl), l);
+  return g.length === 0 ? f.length - 1 : g.length - 1;
+}
