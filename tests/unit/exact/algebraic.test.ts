@@ -1,0 +1,73 @@
+// Real algebraic numbers: comparison consistent with decimal approximations, sign, refinement, exactness.
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import {
+  algebraicAsRational, algebraicCmp, algebraicFromInterval, algebraicFromRational, algebraicRealRoots,
+  algebraicRefine, algebraicSign, algebraicToDecimal, algebraicToNumber, type RealAlgebraic,
+} from '../../../src/exact/algebraic.ts';
+import { rat, ratCmp, ratSub } from '../../../src/exact/rational.ts';
+import { upolyMul } from '../../../src/exact/upoly.ts';
+import { InvalidInput } from '../../../src/exact/errors.ts';
+
+const sqrt = (n: bigint): RealAlgebraic => algebraicRealRoots([-n, 0n, 1n]).at(-1)!;
+
+describe('real algebraic numbers', () => {
+  it('sqrt 2 to 50 digits (value from memory, confirmed by PARI: sqrt(2) at \\p 60)', () => {
+    expect(algebraicToDecimal(sqrt(2n), 50)).toBe('1.4142135623730950488016887242096980785696718753769');
+    expect(algebraicToDecimal(algebraicRealRoots([-2n, 0n, 0n, 1n])[0], 20)).toBe('1.2599210498948731648');
+  });
+  it('rational roots come back exact and as rationals', () => {
+    const rs = algebraicRealRoots(upolyMul([-1n, 3n], [-2n, 0n, 1n]));
+    expect(rs.length).toBe(3);
+    expect(algebraicAsRational(rs[1])).toEqual(rat(1n, 3n));
+    expect(algebraicAsRational(rs[2])).toBeNull();
+    expect(algebraicToDecimal(rs[1], 5)).toBe('0.33333');
+  });
+  it('sign, including zero inside the interval', () => {
+    const a = algebraicFromInterval([0n, -2n, 0n, 1n], rat(-1n), rat(1n)); // root 0 of x^3 - 2x
+    expect(algebraicSign(a)).toBe(0);
+    expect(algebraicSign(sqrt(3n))).toBe(1);
+    expect(algebraicSign(algebraicRealRoots([-3n, 0n, 1n])[0])).toBe(-1);
+    expect(algebraicSign(algebraicFromRational(rat(-5n, 2n)))).toBe(-1);
+  });
+  it('equal numbers with different polynomials compare equal', () => {
+    const a = sqrt(2n);
+    const b = algebraicRealRoots(upolyMul([-2n, 0n, 1n], [-5n, 1n, 1n])).find((x) => Math.abs(algebraicToNumber(x) - Math.SQRT2) < 1e-9)!;
+    expect(algebraicCmp(a, b)).toBe(0);
+    expect(algebraicCmp(a, sqrt(3n))).toBe(-1);
+    expect(algebraicCmp(sqrt(3n), algebraicFromRational(rat(17n, 10n)))).toBe(1);
+  });
+  it('comparison agrees with 30-digit decimals on random square roots (property)', () => {
+    fc.assert(
+      fc.property(fc.bigInt({ min: 2n, max: 10n ** 12n }), fc.bigInt({ min: 2n, max: 10n ** 12n }), (m, n) => {
+        const a = sqrt(m);
+        const b = sqrt(n);
+        const c = algebraicCmp(a, b);
+        expect(c).toBe(m < n ? -1 : m > n ? 1 : 0);
+        const da = Number(algebraicToDecimal(a, 17));
+        const db = Number(algebraicToDecimal(b, 17));
+        if (c < 0) expect(da).toBeLessThanOrEqual(db);
+        if (c > 0) expect(da).toBeGreaterThanOrEqual(db);
+        expect(algebraicToNumber(a)).toBeCloseTo(Math.sqrt(Number(m)), 6);
+      }),
+      { numRuns: 40 },
+    );
+  });
+  it('refinement narrows and keeps the number', () => {
+    const a = sqrt(5n);
+    const r = algebraicRefine(a, rat(1n, 10n ** 40n));
+    expect(ratCmp(ratSub(r.hi, r.lo), rat(1n, 10n ** 40n))).toBeLessThanOrEqual(0);
+    expect(algebraicCmp(a, r)).toBe(0);
+  });
+  it('huge and tiny values in scientific layout', () => {
+    const big = algebraicRealRoots([-(10n ** 401n), 0n, 1n]).at(-1)!; // sqrt(10^401) = 3.162...e200
+    expect(algebraicToDecimal(big, 6)).toBe('3.16228e+200');
+    const tiny = algebraicRealRoots([-1n, 0n, 10n ** 401n]).at(-1)!;
+    expect(algebraicToDecimal(tiny, 6)).toBe('3.16228e-201');
+  });
+  it('refuses bad input', () => {
+    expect(() => algebraicFromInterval([-2n, 0n, 1n], rat(2n), rat(3n))).toThrow(InvalidInput);
+    expect(() => algebraicRealRoots([])).toThrow(InvalidInput);
+    expect(() => algebraicToDecimal(sqrt(2n), 0)).toThrow(/digits/);
+  });
+});
