@@ -1,4 +1,5 @@
 // Every benchmark suite, in the order `npm run bench` runs them. Add one line per suite.
 import type { BenchSuite } from './bench.ts';
+import { formsBench } from './forms.bench.ts';
 
-export const SUITES: BenchSuite[] = [];
+export const SUITES: BenchSuite[] = [formsBench];
