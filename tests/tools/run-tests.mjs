@@ -7,8 +7,8 @@ import { ensureOracles } from './oracles.mjs';
 
 const missing = ensureOracles();
 if (missing.length > 0) {
-  for (const o of missing) console.error(`missing: ${o.command} (Debian package ${o.package}), needed for ${o.why}`);
-  console.error('Install them (apt-get install -y ' + missing.map((o) => o.package).join(' ') + ') and run npm test again.');
+  for (const o of missing) console.error(`missing: ${o.command} (Debian ${o.packages.join(', ')}), needed for ${o.why}`);
+  console.error('Install them (apt-get install -y ' + missing.flatMap((o) => o.packages).join(' ') + ') and run npm test again.');
   console.log('tests: 0 passed, 1 failed');
   process.exit(1);
 }
