@@ -25,6 +25,9 @@ import { formPrimitive, monomialCount, monomialIndex, type Form } from './form.t
 /** The highest degree of curve Ninefold handles. */
 export const MAX_FORM_DEGREE = 6;
 
+/** Parentheses and unary signs nested deeper than this are refused (a guard for the recursion). */
+const MAX_NESTING = 400;
+
 /** Bits allowed in a constant raised to a power (10^5000 is fine, 10^(10^9) is refused). */
 const MAX_POWER_BITS = 1 << 22;
 
@@ -148,6 +151,8 @@ const VARIABLE_INDEX: Record<string, 0 | 1 | 2> = { x: 0, y: 1, X: 0, Y: 1, Z: 2
 
 class Parser {
   private pos = 0;
+  /** Nesting of parentheses and unary signs, bounded so that no input can exhaust the stack. */
+  private depth = 0;
   private alphabet: { upper: boolean; col: number; letter: string } | null = null;
   /** The top-level summands of both sides, with their columns, for naming a term that is not homogeneous. */
   readonly summands: { col: number; poly: Poly }[] = [];
@@ -286,7 +291,9 @@ class Parser {
     const t = this.peek();
     if (this.isOp(t, '-') || this.isOp(t, '+')) {
       this.pos++;
+      this.enter(t.col);
       const f = this.factor(`after '${t.text}' at column ${t.col}`);
+      this.depth--;
       return t.text === '-' ? polyScale(f, ratNeg(RAT_ONE)) : f;
     }
     return this.power(context);
@@ -346,6 +353,10 @@ class Parser {
     return Number(value.num);
   }
 
+  private enter(col: number): void {
+    if (++this.depth > MAX_NESTING) this.fail(`nested more than ${MAX_NESTING} levels deep`, col);
+  }
+
   private closeParen(open: Token): void {
     const t = this.peek();
     if (!this.isOp(t, ')')) {
@@ -369,8 +380,10 @@ class Parser {
     }
     if (this.isOp(t, '(')) {
       this.pos++;
+      this.enter(t.col);
       const inner = this.sum(false, `after '(' at column ${t.col}`);
       this.closeParen(t);
+      this.depth--;
       return inner;
     }
     const where = context ? ` ${context}` : '';

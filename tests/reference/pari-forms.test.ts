@@ -55,6 +55,35 @@ describe('forms agree with PARI/GP', () => {
     });
   });
 
+  it('with a vanishing top coefficient in v, Res_v is the formal-degree resultant: polresultant(F + e·v^d1, G + e·v^d2, v) at e = 0', () => {
+    // Adding e·v^d makes PARI's actual degree the formal one; the resultant is a polynomial in e, and its
+    // value at e = 0 is the Sylvester determinant with formal degrees (Cox, Little, O'Shea, ch. 3 §6).
+    const rand = seededRandom(SEED + 3);
+    const cases: { f: Form; g: Form; v: Variable }[] = [];
+    for (let k = 0; k < 24; k++) {
+      const v = (k % 3) as Variable;
+      const d1 = 1 + Math.floor(rand() * 4);
+      const d2 = 1 + Math.floor(rand() * 4);
+      const zeroTop = (f: Form) => ({ degree: f.degree, coeffs: f.coeffs.map((c, i) => (monomials(f.degree)[i][v] === f.degree ? 0n : c)) });
+      const f = zeroTop(randomForm(rand, d1, 6));
+      const g0 = randomForm(rand, d2, 6, v);
+      cases.push({ f, g: k % 4 === 3 ? zeroTop(g0) : g0, v });
+    }
+    const script = cases
+      .map(({ f, g, v }) => {
+        const [a, b] = VARS.filter((_, i) => i !== v);
+        const D = f.degree * g.degree;
+        const w = VARS[v];
+        return `R=subst(polresultant(${gpForm(f)}+e*${w}^${f.degree},${gpForm(g)}+e*${w}^${g.degree},${w}),e,0); print(vector(${D + 1},i,polcoeff(polcoeff(R,${D}-(i-1),${a}),i-1,${b})))`;
+      })
+      .join('\n');
+    const out = gp(script);
+    cases.forEach(({ f, g, v }, i) => {
+      const ours = formResultant(f, g, v).map(String);
+      expect(ours, `seed ${SEED + 3}, case ${i}: f=${gpForm(f)} g=${gpForm(g)} v=${VARS[v]}`).toEqual(gpVector(out[i]));
+    });
+  });
+
   it('F(sP + tQ) equals substvec(F, [x,y,z], s*P + t*Q)', () => {
     const rand = seededRandom(SEED + 1);
     const cases: { f: Form; p: bigint[]; q: bigint[] }[] = [];

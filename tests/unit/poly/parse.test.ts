@@ -92,6 +92,8 @@ const MALFORMED: [string, string | RegExp, number][] = [
   ['3 = 4', 'no variable', 1],
   ['y^2 = x^3 z', "unknown symbol 'z'", 11],
   ['() + x', "expected a term after '(' at column 1, found ')'", 2],
+  ['('.repeat(500) + 'x' + ')'.repeat(500), 'nested more than 400 levels deep', 401],
+  ['-'.repeat(1000) + 'x', 'nested more than 400 levels deep', 402],
 ];
 
 describe('formParse: malformed equations name the column and what was expected', () => {
@@ -167,6 +169,27 @@ describe('print then parse (property, fast-check)', () => {
         expect(formEquals(back.form, formPrimitive(f)), text).toBe(true);
       }),
       { numRuns: 300 },
+    );
+  });
+});
+
+describe('formParse never crashes (property, fast-check)', () => {
+  it('any string over the notation alphabet either parses or gives a ParseError with a column inside it', () => {
+    const alphabet = 'xyXYZzq0123456789.+-*/^()= ²·−%';
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(...alphabet.split('')), { maxLength: 30 }).map((a) => a.join('')), (text) => {
+        try {
+          const { form } = formParse(text);
+          expect(form.degree).toBeGreaterThanOrEqual(1);
+          expect(form.degree).toBeLessThanOrEqual(MAX_FORM_DEGREE);
+        } catch (e) {
+          expect(e).toBeInstanceOf(ParseError);
+          const col = (e as ParseError).column;
+          expect(col).toBeGreaterThanOrEqual(1);
+          expect(col).toBeLessThanOrEqual(text.length + 1);
+        }
+      }),
+      { numRuns: 3000 },
     );
   });
 });
