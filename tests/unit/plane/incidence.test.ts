@@ -27,7 +27,9 @@ describe('join and meet (projective duality: common practice)', () => {
         expect(linePointIncident(l, p) && linePointIncident(l, q)).toBe(true);
         // Duality: the same cross product read as lines meeting gives back the same triple.
         expect(lineLineMeet(p, q)).toEqual(l);
-        const m = lineLineMeet(l, pointPointJoin(p, triple(p[0] + 1n, p[1], p[2] + 2n)));
+        // A second line through p: join p to a coordinate point off l (one always exists since l is not zero).
+        const off = ([[1n, 0n, 0n], [0n, 1n, 0n], [0n, 0n, 1n]] as const).find((e) => dot(l, e) !== 0n)!;
+        const m = lineLineMeet(l, pointPointJoin(p, triple(off[0], off[1], off[2])));
         expect(linePointIncident(l, m)).toBe(true);
       }),
     );
