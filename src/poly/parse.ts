@@ -18,9 +18,10 @@
 import { ParseError } from '../exact/errors.ts';
 import { bitLength, lcm } from '../exact/integer.ts';
 import {
-  RAT_ONE, RAT_ZERO, rat, ratAdd, ratDiv, ratMul, ratNeg, ratPow, type Rational,
+  RAT_ONE, RAT_ZERO, ratAdd, ratDiv, ratMul, ratNeg, ratPow, type Rational,
 } from '../exact/rational.ts';
 import { formPrimitive, monomialCount, monomialIndex, type Form } from './form.ts';
+import { tokenise, type Token } from './parse-tokens.ts';
 
 /** The highest degree of curve Ninefold handles. */
 export const MAX_FORM_DEGREE = 6;
@@ -35,76 +36,6 @@ export interface ParsedForm {
   readonly form: Form;
   /** True when the equation was written in X, Y, Z. */
   readonly homogeneous: boolean;
-}
-
-type TokenKind = 'num' | 'var' | 'op' | 'end';
-
-interface Token {
-  readonly kind: TokenKind;
-  /** The operator or variable letter; digits for numbers. */
-  readonly text: string;
-  /** 1-based column of the first character. */
-  readonly col: number;
-  readonly value?: Rational;
-  /** For numbers: true when written with a decimal point (refused as an exponent). */
-  readonly decimal?: boolean;
-}
-
-const SUPERSCRIPTS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
-
-function tokenise(text: string, fail: (msg: string, col: number) => never): Token[] {
-  const out: Token[] = [];
-  let i = 0;
-  while (i < text.length) {
-    const ch = text[i];
-    const col = i + 1;
-    if (ch === ' ' || ch === '\t' || ch === '\n' || ch === '\r') {
-      i++;
-    } else if ((ch >= '0' && ch <= '9') || ch === '.') {
-      let j = i;
-      while (j < text.length && text[j] >= '0' && text[j] <= '9') j++;
-      const whole = text.slice(i, j);
-      let frac: string | undefined;
-      if (text[j] === '.') {
-        let k = j + 1;
-        while (k < text.length && text[k] >= '0' && text[k] <= '9') k++;
-        frac = text.slice(j + 1, k);
-        if (whole === '' && frac === '') fail(`expected a digit after '.'`, col);
-        j = k;
-        if (text[j] === '.') fail(`a number has at most one decimal point`, j + 1);
-      }
-      const f = frac ?? '';
-      const value = rat(BigInt((whole || '0') + f), 10n ** BigInt(f.length));
-      out.push({ kind: 'num', text: text.slice(i, j), col, value, decimal: frac !== undefined });
-      i = j;
-    } else if (SUPERSCRIPTS.includes(ch)) {
-      let j = i;
-      let digits = '';
-      while (j < text.length && SUPERSCRIPTS.includes(text[j])) digits += SUPERSCRIPTS.indexOf(text[j++]).toString();
-      out.push({ kind: 'op', text: '^', col });
-      out.push({ kind: 'num', text: digits, col, value: rat(BigInt(digits)) });
-      i = j;
-    } else if (/[A-Za-z]/.test(ch)) {
-      out.push({ kind: 'var', text: ch, col });
-      i++;
-    } else if (ch === '*' && text[i + 1] === '*') {
-      out.push({ kind: 'op', text: '^', col });
-      i += 2;
-    } else if ('+-*/^()='.includes(ch)) {
-      out.push({ kind: 'op', text: ch, col });
-      i++;
-    } else if (ch === '\u2212') {
-      out.push({ kind: 'op', text: '-', col });
-      i++;
-    } else if (ch === '\u00b7' || ch === '\u00d7') {
-      out.push({ kind: 'op', text: '*', col });
-      i++;
-    } else {
-      fail(`unexpected character '${ch}'; expected a number, x, y (or X, Y, Z), an operator + - * / ^, '(' or ')'`, col);
-    }
-  }
-  out.push({ kind: 'end', text: '', col: text.length + 1 });
-  return out;
 }
 
 // Polynomials during parsing: monomial X^i Y^j Z^k (i, j, k <= MAX_FORM_DEGREE) packed as i*49 + j*7 + k,
@@ -154,7 +85,7 @@ class Parser {
   /** Nesting of parentheses and unary signs, bounded so that no input can exhaust the stack. */
   private depth = 0;
   private alphabet: { upper: boolean; col: number; letter: string } | null = null;
-  /** The top-level summands of both sides, with their columns, for naming a term that is not homogeneous. */
+  /** The top-level summands of both sides (signs dropped), with their columns, for naming a term that is not homogeneous. */
   readonly summands: { col: number; poly: Poly }[] = [];
 
   constructor(
@@ -191,11 +122,7 @@ class Parser {
     if (this.isOp(t, '=')) {
       eqCol = t.col;
       this.pos++;
-      const firstRight = this.summands.length;
       const right = this.sum(true, `after '=' at column ${eqCol}`);
-      for (let s = firstRight; s < this.summands.length; s++) {
-        this.summands[s].poly = polyScale(this.summands[s].poly, ratNeg(RAT_ONE));
-      }
       poly = polyAdd(left, right, -1);
       t = this.peek();
       if (this.isOp(t, '=')) this.fail(`a second '=' (the first is at column ${eqCol}); an equation has one`, t.col);
@@ -219,7 +146,7 @@ class Parser {
     for (;;) {
       const col = this.peek().col;
       const term = this.term(context);
-      if (top) this.summands.push({ col, poly: sign === 1 ? term : polyScale(term, ratNeg(RAT_ONE)) });
+      if (top) this.summands.push({ col, poly: term });
       acc = polyAdd(acc, term, sign);
       t = this.peek();
       if (this.isOp(t, '+') || this.isOp(t, '-')) {
