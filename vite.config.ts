@@ -8,6 +8,7 @@ export default defineConfig({
   worker: { format: 'es' },
   test: {
     include: ['tests/{unit,reference,e2e}/**/*.test.ts'],
+    setupFiles: ['tests/tools/vitest-setup.ts'],
     testTimeout: 60_000,
     hookTimeout: 120_000,
     pool: 'forks',
