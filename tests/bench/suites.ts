@@ -1,5 +1,6 @@
 // Every benchmark suite, in the order `npm run bench` runs them. Add one line per suite.
 import type { BenchSuite } from './bench.ts';
 import { formsBench } from './forms.bench.ts';
+import { gcdBench, rootsBench } from './roots.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench];

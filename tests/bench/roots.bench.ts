@@ -1,0 +1,108 @@
+// Rational roots and the gcd kernel against PARI/GP. PARI's times are taken inside gp with gettime()
+// around a loop, so its start-up is excluded; ours are medians of repeated runs in this process.
+//
+// "rational roots": degree-9 integer polynomials, each (two to four linear factors v·x − u with 1..6-digit
+// u, v) × (a random rest of the remaining degree with 50- or 500-digit coefficients). PARI's counterpart is
+// nfroots(,p): the rational roots over Q (without multiplicities; ours also returns multiplicities).
+// "gcd kernel": plain Euclid on BigInt vs the kernel in src/exact/gcd.ts vs PARI's gcd, at 100, 1,000 and
+// 20,000 digits, on pairs with a planted common factor.
+import { median, medianMs, type BenchFigure, type BenchSuite } from './bench.ts';
+import { gp, seededRandom } from '../reference/oracles.ts';
+import { upolyRationalRoots } from '../../src/exact/rational-roots.ts';
+import { gcd, gcdEuclid } from '../../src/exact/gcd.ts';
+import { upolyMul, type UPoly } from '../../src/exact/upoly.ts';
+import { ratToString } from '../../src/exact/rational.ts';
+
+function digitsExactly(rand: () => number, digits: number): bigint {
+  let s = String(1 + Math.floor(rand() * 9));
+  for (let i = 1; i < digits; i++) s += Math.floor(rand() * 10).toString();
+  return rand() < 0.5 ? -BigInt(s) : BigInt(s);
+}
+
+function upTo(rand: () => number, digits: number): bigint {
+  return digitsExactly(rand, 1 + Math.floor(rand() * digits));
+}
+
+/** The fixed set: products of linear factors and a dense rest, degree 9 in all. */
+export function rootsBenchSet(seed: number, count: number, digits: number): UPoly[] {
+  const rand = seededRandom(seed);
+  const out: UPoly[] = [];
+  for (let i = 0; i < count; i++) {
+    const k = 2 + Math.floor(rand() * 3);
+    let p: UPoly = [1n];
+    for (let j = 0; j < k; j++) {
+      let v = upTo(rand, 6);
+      if (v < 0n) v = -v;
+      p = upolyMul(p, [-upTo(rand, 6), v]);
+    }
+    const rest = Array.from({ length: 10 - k }, () => digitsExactly(rand, digits));
+    out.push(upolyMul(p, rest));
+  }
+  return out;
+}
+
+const gpPoly = (p: UPoly) => `Pol([${p.slice().reverse().join(',')}])`;
+
+function pariMs(setup: string, loop: string, reps: number): number {
+  const out = gp(`${setup}\ngettime(); for(r=1,${reps}, ${loop}); print(gettime())`);
+  return Number(out[out.length - 1]) / reps;
+}
+
+function rootsFigure(digits: number, count: number, reps: number): BenchFigure {
+  const set = rootsBenchSet(9000 + digits, count, digits);
+  // Same answers first: a benchmark of wrong answers would be meaningless.
+  const ours = set.map((p) => upolyRationalRoots(p).map((r) => ratToString(r.root)).sort().join(' '));
+  const theirs = gp(`v=[${set.map(gpPoly).join(',')}];\nfor(i=1,#v, my(s=""); my(r=nfroots(,v[i])); for(j=1,#r, s=Str(s, r[j], " ")); print(s))`);
+  const mismatch = ours.findIndex((o, i) => o !== (theirs[i] ?? '').trim().split(/\s+/).filter(Boolean).sort().join(' '));
+  if (mismatch >= 0) throw new Error(`rational roots disagree with PARI nfroots at case ${mismatch} (seed ${9000 + digits})`);
+  const perPoly = set.map((p) => medianMs(() => upolyRationalRoots(p), reps, 1));
+  const ninefoldMs = median(perPoly);
+  // PARI: median over the set of the per-polynomial time, each timed over `reps` calls inside gp.
+  const pariTimes = gp(
+    `v=[${set.map(gpPoly).join(',')}];\nfor(i=1,#v, gettime(); for(r=1,${reps * 4}, nfroots(,v[i])); print(gettime()/${reps * 4}.))`,
+  ).map(Number);
+  const pariMsMedian = median(pariTimes);
+  return {
+    label: `rational roots of degree-9 polynomials, ${digits}-digit coefficients (${count} polynomials, median per polynomial; PARI nfroots(,p))`,
+    values: { ninefoldMs, pariMs: pariMsMedian, ratio: ninefoldMs / pariMsMedian },
+  };
+}
+
+export const rootsBench: BenchSuite = {
+  name: 'rational roots',
+  async run(): Promise<BenchFigure[]> {
+    return [rootsFigure(50, 40, 9), rootsFigure(500, 20, 5)];
+  },
+};
+
+function gcdPairs(seed: number, digits: number, n: number): [bigint, bigint][] {
+  const rand = seededRandom(seed);
+  return Array.from({ length: n }, () => {
+    const g = digitsExactly(rand, Math.max(1, digits / 10));
+    return [digitsExactly(rand, digits - digits / 10) * g, digitsExactly(rand, digits - digits / 10) * g];
+  });
+}
+
+export const gcdBench: BenchSuite = {
+  name: 'gcd kernel',
+  async run(): Promise<BenchFigure[]> {
+    const figures: BenchFigure[] = [];
+    for (const [digits, n, reps] of [
+      [100, 2000, 7],
+      [1000, 200, 7],
+      [20000, 3, 3],
+    ] as const) {
+      const pairs = gcdPairs(777 + digits, digits, n);
+      for (const [a, b] of pairs) if (gcd(a, b) !== gcdEuclid(a, b)) throw new Error('gcd kernel disagrees with Euclid');
+      const euclidMs = medianMs(() => pairs.forEach(([a, b]) => gcdEuclid(a, b)), digits === 20000 ? 1 : reps, 1) / n;
+      const kernelMs = medianMs(() => pairs.forEach(([a, b]) => gcd(a, b)), reps, 1) / n;
+      const loops = digits === 20000 ? 200 : digits === 1000 ? 5000 : 50000;
+      const pariMsEach = pariMs(`v=[${pairs.map(([a, b]) => `[${a},${b}]`).join(',')}]; m=#v;`, `gcd(v[r%m+1][1], v[r%m+1][2])`, loops);
+      figures.push({
+        label: `gcd of two ${digits}-digit integers (ms per gcd)`,
+        values: { euclidMs, kernelMs, pariMs: pariMsEach, euclidOverKernel: euclidMs / kernelMs, kernelOverPari: kernelMs / pariMsEach },
+      });
+    }
+    return figures;
+  },
+};
