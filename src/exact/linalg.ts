@@ -12,7 +12,7 @@
 // Gauss-Jordan variant used for kernels keeps the same property (every entry is again a minor).
 import { InvalidInput, NinefoldError } from './errors.ts';
 import { lcm, primitive } from './integer.ts';
-import type { Rational } from './rational.ts';
+import { rat, type Rational } from './rational.ts';
 
 export type IntMatrix = readonly (readonly bigint[])[];
 
@@ -212,4 +212,20 @@ export function matClearRows(m: readonly (readonly Rational[])[]): { matrix: big
     return row.map((q) => (q.num * l) / q.den);
   });
   return { matrix, scales };
+}
+
+/** Rank over Q of a rational matrix (rows cleared first; clearing a row does not change the rank). */
+export function matRankRational(m: readonly (readonly Rational[])[]): number {
+  return matRank(matClearRows(m).matrix);
+}
+
+/** Kernel of a rational matrix as primitive integer vectors (clearing rows keeps the kernel). */
+export function matKernelRational(m: readonly (readonly Rational[])[], cols?: number): bigint[][] {
+  return matKernel(matClearRows(m).matrix, cols);
+}
+
+/** Determinant of a square rational matrix: det of the cleared matrix divided by the row scales. */
+export function matDeterminantRational(m: readonly (readonly Rational[])[]): Rational {
+  const { matrix, scales } = matClearRows(m);
+  return rat(matDeterminant(matrix), scales.reduce((a, b) => a * b, 1n));
 }

@@ -2,7 +2,10 @@
 // random integer matrices, including rank-deficient ones built as products A·B with a thin inner size.
 import { describe, expect, it } from 'vitest';
 import { gp, randomBigInt, seededRandom } from './oracles.ts';
-import { matDeterminant, matKernel, matMul, matMulVec, matRank } from '../../src/exact/linalg.ts';
+import {
+  matDeterminant, matDeterminantRational, matKernel, matKernelRational, matMul, matMulVec, matRank, matRankRational,
+} from '../../src/exact/linalg.ts';
+import { rat, ratToString, type Rational } from '../../src/exact/rational.ts';
 
 const SEED = 20261201;
 
@@ -61,6 +64,30 @@ describe('linear algebra agrees with PARI/GP (matrank, matker, matdet)', () => {
     const out = gp(cases.map((m) => `print(matdet(${gpMatrix(m)}))`).join('\n'));
     cases.forEach((m, i) => {
       expect(matDeterminant(m).toString(), `seed ${SEED + 1}, case ${i}: ${gpMatrix(m)}`).toBe(out[i]);
+    });
+  });
+
+  it('rational matrices: rank, kernel dimension and determinant (rows cleared) agree with matrank, matker, matdet', () => {
+    const rand = seededRandom(SEED + 2);
+    const cases: Rational[][][] = [];
+    for (let t = 0; t < 25; t++) {
+      const n = 1 + Math.floor(rand() * 10);
+      const cols = t % 2 === 0 ? n : 1 + Math.floor(rand() * 14);
+      const num = randomMatrix(rand, n, cols, 12);
+      const den = randomMatrix(rand, n, cols, 6);
+      const m = num.map((r, i) => r.map((a, j) => rat(a, den[i][j] === 0n ? 1n : den[i][j])));
+      // Make some of them rank-deficient: the last row a rational multiple of the first.
+      if (t % 3 === 0 && n > 1) m[n - 1] = m[0].map((q) => rat(q.num * 7n, q.den * 3n));
+      cases.push(m);
+    }
+    const gpRat = (m: Rational[][]) => 'Mat([' + m.map((r) => r.map(ratToString).join(',')).join(';') + '])';
+    const out = gp(cases.map((m) => `M=${gpRat(m)}; print(matrank(M), " ", #matker(M), " ", if(#M==#M~, matdet(M), "-"))`).join('\n'));
+    cases.forEach((m, i) => {
+      const [rank, nullity, det] = out[i].split(' ');
+      const where = `seed ${SEED + 2}, case ${i}: ${gpRat(m)}`;
+      expect(matRankRational(m), where).toBe(Number(rank));
+      expect(matKernelRational(m).length, where).toBe(Number(nullity));
+      if (det !== '-') expect(ratToString(matDeterminantRational(m)), where).toBe(det);
     });
   });
 });
