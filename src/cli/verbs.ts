@@ -2,14 +2,36 @@
 import type { Verb } from './verb.ts';
 import { form } from './verbs/form.ts';
 import { through } from './verbs/through.ts';
+import { third } from './verbs/third.ts';
+import { sum } from './verbs/sum.ts';
+import { negate } from './verbs/negate.ts';
+import { multiple } from './verbs/multiple.ts';
+import { order } from './verbs/order.ts';
+import { weierstrass } from './verbs/weierstrass.ts';
+import { curve } from './verbs/curve.ts';
+import { parametrise } from './verbs/parametrise.ts';
+import { figure } from './verbs/figure.ts';
+import { trials } from './verbs/trials.ts';
 import { meet } from './verbs/meet.ts';
 import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
+import { points } from './verbs/points.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
   through,
+  third,
+  sum,
+  negate,
+  multiple,
+  order,
+  weierstrass,
+  curve,
+  parametrise,
+  figure,
+  trials,
   meet,
   ninth,
   nine,
+  points,
 ];

@@ -1,0 +1,97 @@
+// The group law on a smooth plane cubic with any rational base point O (flex or not).
+//
+// Canonical form: points are primitive integer triples (src/plane/point.ts), so equal group elements are
+// equal arrays whatever path computed them. Law (Silverman–Tate, Rational Points on Elliptic Curves,
+// I.2; Cassels, Lectures on Elliptic Curves, ch. 7): P + Q = O * (P * Q), −P = P * (O * O). Associativity
+// for a non-flex O is the Cayley–Bacharach theorem, so nothing here needs O to be a flex.
+//
+// Changing the base point from O to O2: the map P ↦ P + O2 (law with base O) carries the law with base O
+// to the law with base O2, because (P + O2) +₂ (Q + O2) = P + Q + O2 where X +₂ Y = X + Y − O2.
+import { InvalidInput } from '../exact/errors.ts';
+import type { Form } from '../poly/form.ts';
+import { tripleEquals, tripleIsZero, cross, type Point } from '../plane/point.ts';
+import { chordThird, cubicRequire, cubicRequireSmoothPoint, tangentThird } from './chord.ts';
+
+/** A cubic with a chosen base point; `oo` is O * O, the point whose chord with P gives −P. */
+export interface CubicGroup {
+  readonly curve: Form;
+  readonly base: Point;
+  readonly oo: Point;
+}
+
+/** Checks f is a cubic and O a smooth point on it; the group law needs f smooth (not checked here). */
+export function groupMake(f: Form, o: Point, name = 'base'): CubicGroup {
+  cubicRequire(f);
+  cubicRequireSmoothPoint(f, o, name);
+  return { curve: f, base: o, oo: tangentThird(f, o, name) };
+}
+
+// Assumes p, q smooth points of g.curve.
+function star(g: CubicGroup, p: Point, q: Point): Point {
+  return tripleIsZero(cross(p, q)) ? tangentThird(g.curve, p) : chordThird(g.curve, p, q);
+}
+
+/** P + Q in the group (internal tier: points already checked). */
+export function groupAddIn(g: CubicGroup, p: Point, q: Point): Point {
+  if (tripleEquals(p, g.base)) return q;
+  if (tripleEquals(q, g.base)) return p;
+  return star(g, g.base, star(g, p, q));
+}
+
+/** −P in the group (internal tier). */
+export function groupNegateIn(g: CubicGroup, p: Point): Point {
+  if (tripleEquals(p, g.base)) return p;
+  return star(g, p, g.oo);
+}
+
+/** nP by double-and-add (internal tier); negative n gives −(|n|P), n = 0 gives O. */
+export function groupMultipleIn(g: CubicGroup, p: Point, n: bigint): Point {
+  if (n < 0n) return groupNegateIn(g, groupMultipleIn(g, p, -n));
+  let acc = g.base;
+  for (const b of n.toString(2)) {
+    acc = groupAddIn(g, acc, acc);
+    if (b === '1') acc = groupAddIn(g, acc, p);
+  }
+  return acc;
+}
+
+/** P + Q on the smooth cubic f with base point O. */
+export function groupAdd(f: Form, o: Point, p: Point, q: Point): Point {
+  const g = groupMake(f, o);
+  cubicRequireSmoothPoint(f, p, 'P');
+  cubicRequireSmoothPoint(f, q, 'Q');
+  return groupAddIn(g, p, q);
+}
+
+/** −P on the smooth cubic f with base point O. */
+export function groupNegate(f: Form, o: Point, p: Point): Point {
+  const g = groupMake(f, o);
+  cubicRequireSmoothPoint(f, p, 'P');
+  return groupNegateIn(g, p);
+}
+
+/** The largest |n| accepted by groupMultiple: heights grow like n², so 10^4 is already tens of millions of digits away from anything useful beyond it. */
+export const GROUP_MULTIPLE_LIMIT = 10_000n;
+
+/** nP on the smooth cubic f with base point O, for |n| ≤ 10^4. */
+export function groupMultiple(f: Form, o: Point, p: Point, n: bigint | number): Point {
+  const m = BigInt(n);
+  if (m > GROUP_MULTIPLE_LIMIT || -m > GROUP_MULTIPLE_LIMIT) {
+    throw new InvalidInput(`the multiple must be between -${GROUP_MULTIPLE_LIMIT} and ${GROUP_MULTIPLE_LIMIT}, got ${m}`, 'N');
+  }
+  const g = groupMake(f, o);
+  cubicRequireSmoothPoint(f, p, 'P');
+  return groupMultipleIn(g, p, m);
+}
+
+/**
+ * The image of P under the change of base point from O to O2: P ↦ P + O2 (law with base O). It is an
+ * isomorphism from the group with base O to the group with base O2 (see the head of this file); its
+ * inverse is P ↦ P − O2 in the law with base O.
+ */
+export function groupRebase(f: Form, o: Point, o2: Point, p: Point): Point {
+  const g = groupMake(f, o);
+  cubicRequireSmoothPoint(f, o2, 'new base');
+  cubicRequireSmoothPoint(f, p, 'P');
+  return groupAddIn(g, p, o2);
+}
