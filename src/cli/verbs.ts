@@ -8,14 +8,9 @@ import { negate } from './verbs/negate.ts';
 import { multiple } from './verbs/multiple.ts';
 import { order } from './verbs/order.ts';
 import { weierstrass } from './verbs/weierstrass.ts';
-import { curve } from './verbs/curve.ts';
-import { parametrise } from './verbs/parametrise.ts';
-import { figure } from './verbs/figure.ts';
-import { trials } from './verbs/trials.ts';
 import { meet } from './verbs/meet.ts';
 import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
-import { points } from './verbs/points.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
@@ -26,12 +21,7 @@ export const VERBS: readonly Verb[] = [
   multiple,
   order,
   weierstrass,
-  curve,
-  parametrise,
-  figure,
-  trials,
   meet,
   ninth,
   nine,
-  points,
 ];
