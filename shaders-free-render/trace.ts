@@ -1,0 +1,351 @@
+// The tracer: the real locus of F(x, y) = 0 inside a viewport, as polylines and dots with the right
+// topology (a cylindrical decomposition in the sheared frame of frame.ts).
+//
+// Between consecutive critical abscissae of the projection to U the real roots V_1(U) < ... < V_m(U) are
+// smooth and never meet, so each is one branch piece: it is started at the interval's midpoint and
+// followed to both ends (follow.ts). Pieces meet only on the critical lines, at junctions: a fold or an
+// ordinary point where two pieces join into one polyline, or a singular point where the pieces end.
+// A singular point with no piece at it is an isolated real point (a dot); a closed polyline smaller
+// than a pixel is drawn as a dot too. Critical abscissae and singular points come from the core's exact
+// landmarks when given (already in the world's sheared coordinate u = x - s*y), else from a float search.
+import { ABSCISSA_MERGE, criticalFloatSearch, foldRefine, singularRefine } from './critical-float.ts';
+import { branchFollow, outsidePx, screenLength, type FollowEnd, type FollowView } from './follow.ts';
+import {
+  floatFormCheck, formAffine, frameAtU, frameEval, frameMake, frameToWorld, shearChoose, worldToFrame,
+  type FloatForm, type Frame,
+} from './frame.ts';
+import { fpolyRealRoots } from './upoly-float.ts';
+import { piecesAssemble, type Fragment, type Junction } from './assemble.ts';
+import type { BranchEnd } from './display-list.ts';
+
+/** A world rectangle drawn into width x height CSS pixels at a device-pixel ratio. */
+export interface TraceView {
+  readonly xmin: number;
+  readonly ymin: number;
+  readonly xmax: number;
+  readonly ymax: number;
+  readonly width: number;
+  readonly height: number;
+  readonly dpr?: number;
+}
+
+/** Landmarks handed over by the core (exact values rounded to doubles). */
+export interface FloatLandmarks {
+  /** The shear s of the critical abscissae below (u = x - s*y); the tracer works in this frame. */
+  readonly shear: number;
+  /** Every critical abscissa u of the projection (x, y) -> x - s*y, ascending. */
+  readonly critical: readonly number[];
+  /** Every real singular point (x, y) in the affine plane. */
+  readonly singular: readonly (readonly [number, number])[];
+}
+
+export interface PreparedCurve {
+  readonly degree: number;
+  readonly affine: number[][];
+  readonly shear: number;
+  readonly landmarks: FloatLandmarks | null;
+}
+
+export interface TracedPolyline {
+  readonly points: number[];
+  readonly closed: boolean;
+  readonly ends: readonly [BranchEnd, BranchEnd] | null;
+}
+
+export interface CurveTrace {
+  readonly polylines: TracedPolyline[];
+  readonly dots: [number, number][];
+  readonly stats: { readonly vertices: number; readonly pieces: number; readonly critical: number };
+}
+
+export interface TraceOptions {
+  /** Largest predictor step in device pixels (vertices end up at most maxGapPx apart). */
+  readonly maxStepPx?: number;
+  readonly maxGapPx?: number;
+}
+
+/** Everything about a curve that does not depend on the viewport; reuse it across pans and zooms. */
+export function curvePrepare(form: FloatForm, landmarks?: FloatLandmarks | null): PreparedCurve {
+  floatFormCheck(form);
+  const affine = formAffine(form);
+  const shear = landmarks ? landmarks.shear : shearChoose(affine, form.degree);
+  return { degree: form.degree, affine, shear, landmarks: landmarks ?? null };
+}
+
+export function curveTrace(curve: PreparedCurve, view: TraceView, options: TraceOptions = {}): CurveTrace {
+  viewCheck(view);
+  const d = curve.degree;
+  const dpr = view.dpr ?? 1;
+  const wpx = view.width * dpr;
+  const hpx = view.height * dpr;
+  const ox = 0.5 * (view.xmin + view.xmax);
+  const oy = 0.5 * (view.ymin + view.ymax);
+  const scaleX = 0.5 * (view.xmax - view.xmin);
+  const scaleY = 0.5 * (view.ymax - view.ymin);
+  const empty: CurveTrace = { polylines: [], dots: [], stats: { vertices: 0, pieces: 0, critical: 0 } };
+  if (d === 0 || curve.affine.every((r) => r.every((c) => c === 0))) return empty;
+  const fr = frameMake(curve.affine, d, curve.shear, ox, oy, scaleX, scaleY);
+  if (fr.a.every((c) => c === 0)) return empty;
+  const fv: FollowView = {
+    fr,
+    pxX: 0.5 * wpx,
+    pxY: 0.5 * hpx,
+    x0: -1,
+    x1: 1,
+    y0: -1,
+    y1: 1,
+    maxStepPx: options.maxStepPx ?? 1.5,
+    maxGapPx: options.maxGapPx ?? 1.9,
+  };
+  const s = fr.shear;
+  const corners = [fv.x0 - s * fv.y0, fv.x0 - s * fv.y1, fv.x1 - s * fv.y0, fv.x1 - s * fv.y1];
+  const margin = 2 / fv.pxX;
+  const umin = Math.min(...corners) - margin;
+  const umax = Math.max(...corners) + margin;
+
+  const { critical, singular } = frameLandmarks(curve, fr, umin, umax);
+  const breaks = [umin, ...critical, umax];
+  const junctions: Junction[] = [];
+  for (const [u, v] of singular) junctions.push({ u, v, singular: true, line: -1, ends: [] });
+  const frags: Fragment[] = [];
+  let vertices = 0;
+  let pieces = 0;
+  for (let k = 0; k + 1 < breaks.length; k++) {
+    const a = breaks[k];
+    const b = breaks[k + 1];
+    const mid = 0.5 * (a + b);
+    if (!(b > a)) continue;
+    for (const root of fpolyRealRoots(frameAtU(fr, mid))) {
+      pieces++;
+      const left: number[] = [];
+      const right: number[] = [];
+      const endL = branchFollow(fv, mid, root.t, -1, a, left);
+      const endR = branchFollow(fv, mid, root.t, 1, b, right);
+      const jl = endResolve(fv, endL, k, k === 0, junctions);
+      const jr = endResolve(fv, endR, k + 1, k + 1 === breaks.length - 1, junctions);
+      const seq: number[] = [jl.u, jl.v];
+      for (let i = left.length - 2; i >= 0; i -= 2) seq.push(left[i], left[i + 1]);
+      seq.push(mid, root.t, ...right, jr.u, jr.v);
+      vertices += runsSplit(fv, seq, jl.junction, jr.junction, frags);
+    }
+  }
+  const assembled = piecesAssemble(frags, junctions);
+  const polylines: TracedPolyline[] = [];
+  const dots: [number, number][] = [];
+  for (const p of assembled.polylines) {
+    const pts: number[] = [];
+    let xlo = Infinity, xhi = -Infinity, ylo = Infinity, yhi = -Infinity;
+    for (let i = 0; i < p.points.length; i += 2) {
+      const [x, y] = frameToWorld(fr, p.points[i], p.points[i + 1]);
+      pts.push(x, y);
+      xlo = Math.min(xlo, x); xhi = Math.max(xhi, x); ylo = Math.min(ylo, y); yhi = Math.max(yhi, y);
+    }
+    const size = Math.max(((xhi - xlo) * wpx) / (view.xmax - view.xmin), ((yhi - ylo) * hpx) / (view.ymax - view.ymin));
+    if (p.closed && size < 1) {
+      dots.push([0.5 * (xlo + xhi), 0.5 * (ylo + yhi)]);
+      continue;
+    }
+    const ends = p.ends ? (p.ends.map((e) => {
+      const [x, y] = frameToWorld(fr, e.u, e.v);
+      return { x, y, kind: e.kind };
+    }) as unknown as [BranchEnd, BranchEnd]) : null;
+    polylines.push({ points: pts, closed: p.closed, ends });
+  }
+  for (const j of assembled.isolated) {
+    if (outsidePx(fv, j.u, j.v) === 0) dots.push(frameToWorld(fr, j.u, j.v));
+  }
+  return { polylines, dots, stats: { vertices, pieces, critical: critical.length } };
+}
+
+function viewCheck(v: TraceView): void {
+  const nums = [v.xmin, v.ymin, v.xmax, v.ymax, v.width, v.height, v.dpr ?? 1];
+  if (!nums.every(Number.isFinite)) throw new Error('the view has a coordinate or size that is not a finite number');
+  if (!(v.xmax > v.xmin) || !(v.ymax > v.ymin)) throw new Error('the view needs xmin < xmax and ymin < ymax');
+  if (!(v.width >= 1) || !(v.height >= 1) || !((v.dpr ?? 1) > 0)) throw new Error('the view needs a pixel size of at least 1 x 1');
+}
+
+// Critical abscissae (ascending, inside (umin, umax)) and singular points in frame coordinates.
+function frameLandmarks(curve: PreparedCurve, fr: Frame, umin: number, umax: number): { critical: number[]; singular: [number, number][] } {
+  let critical: number[];
+  let singular: [number, number][];
+  if (curve.landmarks) {
+    const shift = fr.ox - fr.worldShear * fr.oy;
+    critical = curve.landmarks.critical.map((u) => (u - shift) / fr.scaleX);
+    singular = curve.landmarks.singular.map(([x, y]) => worldToFrame(fr, x, y));
+  } else {
+    const found = criticalFloatSearch(fr, umin, umax);
+    critical = found.abscissae;
+    singular = found.singular;
+  }
+  const all = [...critical, ...singular.map((p) => p[0])].filter((u) => u > umin && u < umax).sort((a, b) => a - b);
+  const unique: number[] = [];
+  for (const u of all) if (!unique.length || u - unique[unique.length - 1] > ABSCISSA_MERGE) unique.push(u);
+  return { critical: unique, singular: singular.filter((p) => p[0] > umin && p[0] < umax) };
+}
+
+interface ResolvedEnd {
+  readonly u: number;
+  readonly v: number;
+  /** Index of the junction this end belongs to, -1 when it attaches to nothing. */
+  readonly junction: number;
+}
+
+// Settle where a followed branch ends: on its critical line, at a fold, or open; and file it under a
+// junction (clustering ends that are within half a pixel on the same line).
+function endResolve(fv: FollowView, end: FollowEnd, line: number, rangeEdge: boolean, junctions: Junction[]): ResolvedEnd {
+  if (rangeEdge && end.kind === 'line') return { u: end.u, v: end.v, junction: -1 };
+  const ev = new Float64Array(4);
+  let p: [number, number] | null = null;
+  if (end.kind === 'line') p = lineRefine(fv.fr, end.u, end.v, ev);
+  if (!p) p = foldRefine(fv.fr, end.u, end.v, ev);
+  if (!p) p = singularRefine(fv.fr, end.u, end.v, ev);
+  if (p && screenLength(fv, p[0] - end.u, p[1] - end.v) > 3) p = null;
+  const [u, v] = p ?? [end.u, end.v];
+  let best = -1;
+  let bestPx = Infinity;
+  for (let j = 0; j < junctions.length; j++) {
+    const J = junctions[j];
+    if (!J.singular && J.line !== line && end.kind === 'line') continue;
+    const dpx = screenLength(fv, J.u - u, J.v - v);
+    const reach = J.singular ? 1 : 0.5;
+    if (dpx <= reach && dpx < bestPx) {
+      best = j;
+      bestPx = dpx;
+    }
+  }
+  if (best < 0) {
+    if (!p && end.kind === 'stuck') return { u, v, junction: -1 };
+    junctions.push({ u, v, singular: false, line: end.kind === 'line' ? line : -2, ends: [] });
+    best = junctions.length - 1;
+  }
+  return { u: junctions[best].u, v: junctions[best].v, junction: best };
+}
+
+// Newton in V on the line U = u (linear convergence at a multiple root is enough here).
+function lineRefine(fr: Frame, u: number, v: number, ev: Float64Array): [number, number] | null {
+  for (let it = 0; it < 100; it++) {
+    frameEval(fr, u, v, ev);
+    if (ev[0] === 0) break;
+    const dv = ev[0] / ev[2];
+    if (!Number.isFinite(dv)) break;
+    v -= dv;
+    if (Math.abs(dv) < 1e-16 * (1 + Math.abs(v))) break;
+  }
+  frameEval(fr, u, v, ev);
+  return Math.abs(ev[0]) <= 1e-12 * Math.max(ev[3], 1e-3) ? [u, v] : null;
+}
+
+// Cut a piece's vertex sequence into the runs inside the window, entering and leaving on the border.
+// Returns the number of vertices kept.
+function runsSplit(fv: FollowView, seq: number[], jStart: number, jEnd: number, frags: Fragment[]): number {
+  let kept = 0;
+  let run: number[] | null = null;
+  let runStart = -1;
+  const n = seq.length / 2;
+  let prevIn = false;
+  for (let i = 0; i < n; i++) {
+    const u = seq[2 * i];
+    const v = seq[2 * i + 1];
+    const inside = outsidePx(fv, u, v) === 0;
+    if (inside && !run) {
+      run = [];
+      if (i === 0) runStart = jStart;
+      else {
+        runStart = -1;
+        const c = borderPoint(fv, seq[2 * i - 2], seq[2 * i - 1], u, v);
+        run.push(c[0], c[1]);
+      }
+    }
+    if (inside && run) {
+      gapFill(fv, run, u, v, 0);
+      run.push(u, v);
+    }
+    if (!inside && run && prevIn) {
+      const c = borderPoint(fv, u, v, seq[2 * i - 2], seq[2 * i - 1]);
+      run.push(c[0], c[1]);
+      frags.push({ points: run, start: runStart, end: -1 });
+      kept += run.length / 2;
+      run = null;
+    }
+    prevIn = inside;
+  }
+  if (run) {
+    frags.push({ points: run, start: runStart, end: jEnd });
+    kept += run.length / 2;
+  }
+  return kept;
+}
+
+// Where the curve crosses the border between an outside and an inside vertex: bisection on G along the
+// border line that the outside vertex lies beyond, between the two vertices' positions along it; where
+// G does not change sign there (the curve nearly tangent to the border), the chord's crossing pulled
+// onto the curve.
+function borderPoint(fv: FollowView, uo: number, vo: number, ui: number, vi: number): [number, number] {
+  let lo = 0;
+  let hi = 1;
+  for (let it = 0; it < 50; it++) {
+    const t = 0.5 * (lo + hi);
+    if (outsidePx(fv, ui + (uo - ui) * t, vi + (vo - vi) * t) === 0) lo = t;
+    else hi = t;
+  }
+  const u = ui + (uo - ui) * lo;
+  const v = vi + (vo - vi) * lo;
+  const s = fv.fr.shear;
+  const xo = uo + s * vo;
+  const onX = xo < fv.x0 ? fv.x0 : xo > fv.x1 ? fv.x1 : null;
+  const onY = vo < fv.y0 ? fv.y0 : vo > fv.y1 ? fv.y1 : null;
+  if (onX === null && onY === null) return project(fv.fr, u, v);
+  const ev = new Float64Array(4);
+  // Along X' = const the free coordinate is V (U = X' - sV); along V = const it is U. The crossing lies
+  // between the two vertices' free coordinates: bisect there when G changes sign, else Newton.
+  const at = (t: number): [number, number] => (onX !== null ? [onX - s * t, t] : [t, onY as number]);
+  const g = (t: number): number => {
+    const [pu, pv] = at(t);
+    return frameEval(fv.fr, pu, pv, ev)[0];
+  };
+  let a = onX !== null ? vi : ui;
+  let b = onX !== null ? vo : uo;
+  let ga = g(a);
+  const gb = g(b);
+  if (ga === 0) return at(a);
+  if (gb === 0) return at(b);
+  if (ga < 0 !== gb < 0) {
+    for (let it = 0; it < 80; it++) {
+      const m = 0.5 * (a + b);
+      const gm = g(m);
+      if (gm === 0 || m === a || m === b) return at(m);
+      if (gm < 0 === ga < 0) {
+        a = m;
+        ga = gm;
+      } else b = m;
+    }
+    return at(0.5 * (a + b));
+  }
+  return project(fv.fr, u, v);
+}
+
+// Assumes (u, v) is within a fraction of a pixel of a smooth part of the curve.
+function project(fr: Frame, u: number, v: number): [number, number] {
+  const ev = new Float64Array(4);
+  for (let it = 0; it < 4; it++) {
+    frameEval(fr, u, v, ev);
+    const g2 = ev[1] * ev[1] + ev[2] * ev[2];
+    if (!(g2 > 0)) break;
+    u -= (ev[0] * ev[1]) / g2;
+    v -= (ev[0] * ev[2]) / g2;
+  }
+  return [u, v];
+}
+
+// Keep consecutive vertices within maxGapPx: fill a long gap with midpoints pulled onto the curve.
+function gapFill(fv: FollowView, run: number[], u: number, v: number, depth: number): void {
+  const k = run.length;
+  if (k === 0 || depth > 10) return;
+  const pu = run[k - 2];
+  const pv = run[k - 1];
+  if (screenLength(fv, u - pu, v - pv) <= fv.maxGapPx) return;
+  const [mu, mv] = project(fv.fr, 0.5 * (pu + u), 0.5 * (pv + v));
+  gapFill(fv, run, mu, mv, depth + 1);
+  run.push(mu, mv);
+  gapFill(fv, run, u, v, depth + 1);
+}
