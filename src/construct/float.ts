@@ -101,7 +101,7 @@ export function formGradientFloat(f: FloatForm, p: F3): F3 {
 /** Third point of the line through P and Q on a cubic (tangent when P ≈ Q): R = (P·∇F(Q))P − (Q·∇F(P))Q,
  * Silverman–Tate, ch. I (as in src/cubic/chord.ts, here in doubles). */
 export function cubicThirdFloat(f: FloatForm, p: F3, q: F3): F3 {
-  if (f3IsZero(f3Cross(p, q)) || Math.hypot(...f3Cross(p, q)) < FLOAT_ZERO) return cubicTangentThirdFloat(f, p);
+  if (f3Sine(p, q) < FLOAT_ZERO) return cubicTangentThirdFloat(f, p);
   const a = f3Dot(p, formGradientFloat(f, q));
   const b = f3Dot(q, formGradientFloat(f, p));
   return f3Normalise([a * p[0] - b * q[0], a * p[1] - b * q[1], a * p[2] - b * q[2]]);
@@ -268,4 +268,9 @@ export function curveThroughPointsFloat(d: number, points: readonly F3[]): Float
   pivots.forEach((c, i) => (v[c] = -rows[i][free] / rows[i][c]));
   const scale = Math.max(...v.map(Math.abs));
   return { degree: d, coeffs: v.map((x) => x / scale) };
+}
+
+/** |a × b| for unit a, b: the sine of the angle between them, 0 when they are the same projective point. */
+export function f3Sine(a: F3, b: F3): number {
+  return Math.hypot(a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]);
 }

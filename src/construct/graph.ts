@@ -123,7 +123,8 @@ export function constructionDelete(doc: ConstructionDoc, id: ObjectId): Construc
   return { ...doc, objects, activeCurve };
 }
 
-/** Change label, style or params of one object (its kind and parents stay). */
+/** Change label, style or params of one object (its kind and parents stay). `params`, when given, replaces
+ * the params as a whole (a point on a curve may switch between "at" and "x"/"near"). */
 export function constructionUpdate(
   doc: ConstructionDoc,
   id: ObjectId,
@@ -135,7 +136,7 @@ export function constructionUpdate(
       ...o,
       label: patch.label ?? o.label,
       style: patch.style ? { ...o.style, ...patch.style } : o.style,
-      construction: patch.params ? { ...o.construction, params: { ...o.construction.params, ...patch.params } } : o.construction,
+      construction: patch.params ? { ...o.construction, params: { ...patch.params } } : o.construction,
     };
   });
   if (!objects.some((o) => o.id === id)) throw new InvalidInput(`no object "${id}"`, 'id');

@@ -20,7 +20,6 @@
 // ids are unique. `constructionValidate` (graph.ts) enforces both on load.
 import type { Form } from '../poly/form.ts';
 import type { Line, Point } from '../plane/point.ts';
-import type { Rational } from '../exact/rational.ts';
 
 export type ObjectId = string;
 
@@ -102,12 +101,13 @@ export interface ConstructionDoc {
 
 // ---- computed values (not serialised) ----
 
-/** A real algebraic number as E1's `RealAlgebraic` (src/exact/algebraic.ts): square-free primitive poly
- * (coefficient of x^i at index i) and an isolating interval with exact endpoints. */
-export interface AlgebraicNumber {
-  readonly poly: readonly bigint[];
-  readonly lo: Rational;
-  readonly hi: Rational;
+/** How an algebraic (real, irrational) point is known exactly. */
+export interface AlgebraicDescription {
+  /** In words, with the defining polynomial and isolating interval, e.g. "x is the root of x^2 - x - 1 in [1, 2]". */
+  readonly text: string;
+  /** The core's exact description (a meet point of src/cubic/meet.ts, a real algebraic number of
+   * src/exact/algebraic.ts), kept for refinement to any precision. */
+  readonly exact: unknown;
 }
 
 /** Floating approximation of a projective point, for drawing: affine (x, y) when finite, else a direction. */
@@ -123,8 +123,8 @@ export interface PointValue {
   readonly status: Status;
   /** Present when status = exact. */
   readonly exact?: Point;
-  /** Present when status = algebraic: affine coordinates. */
-  readonly algebraic?: { readonly x: AlgebraicNumber | Rational; readonly y: AlgebraicNumber | Rational };
+  /** Present when the value was computed exactly as a real algebraic point. */
+  readonly algebraic?: AlgebraicDescription;
   readonly approx: PointApprox;
   /** Intersection multiplicity, for meet points. */
   readonly multiplicity?: number;
