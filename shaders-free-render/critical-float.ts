@@ -69,6 +69,26 @@ function pushNew(list: [number, number][], p: [number, number]): void {
   list.push(p);
 }
 
+/**
+ * Singular points on given vertical lines U = c (the core's exact abscissae of possible singular points):
+ * Newton on (G_U, G_V) from every multiple root of G(c, ·) and every real root of G_V(c, ·), kept when it
+ * converges to a point of the curve on (or within SAME_POINT of) the line.
+ */
+export function singularOnLines(fr: Frame, lines: readonly number[]): [number, number][] {
+  const ev = new Float64Array(4);
+  const out: [number, number][] = [];
+  for (const c of lines) {
+    const p = frameAtU(fr, c);
+    const vs = fpolyRealRoots(fpolyDerivative(p)).map((x) => x.t);
+    for (const x of fpolyRealRoots(p)) if (x.multiple) vs.push(x.t);
+    for (const v of vs) {
+      const sp = singularRefine(fr, c, v, ev);
+      if (sp && Math.abs(sp[0] - c) < SAME_POINT) pushNew(out, sp);
+    }
+  }
+  return out;
+}
+
 /** Newton on (G, G_V) = 0 from (u, v): a fold (vertical tangent) of the curve, or null. */
 export function foldRefine(fr: Frame, u: number, v: number, ev: Float64Array): [number, number] | null {
   for (let it = 0; it < 60; it++) {

@@ -8,7 +8,7 @@
 // A singular point with no piece at it is an isolated real point (a dot); a closed polyline smaller
 // than a pixel is drawn as a dot too. Critical abscissae and singular points come from the core's exact
 // landmarks when given (already in the world's sheared coordinate u = x - s*y), else from a float search.
-import { ABSCISSA_MERGE, criticalFloatSearch, foldRefine, singularRefine } from './critical-float.ts';
+import { ABSCISSA_MERGE, criticalFloatSearch, foldRefine, singularOnLines, singularRefine } from './critical-float.ts';
 import { branchFollow, outsidePx, screenLength, type FollowEnd, type FollowView } from './follow.ts';
 import {
   floatFormCheck, formAffine, frameAtU, frameEval, frameMake, frameToWorld, shearChoose, worldToFrame,
@@ -35,8 +35,10 @@ export interface FloatLandmarks {
   readonly shear: number;
   /** Every critical abscissa u of the projection (x, y) -> x - s*y, ascending. */
   readonly critical: readonly number[];
-  /** Every real singular point (x, y) in the affine plane. */
-  readonly singular: readonly (readonly [number, number])[];
+  /** The critical abscissae that may carry a singular point (the tracer locates the points on them). */
+  readonly singularLines?: readonly number[];
+  /** Every real singular point (x, y) in the affine plane, when the caller knows them. */
+  readonly singular?: readonly (readonly [number, number])[];
 }
 
 export interface PreparedCurve {
@@ -170,8 +172,12 @@ function frameLandmarks(curve: PreparedCurve, fr: Frame, umin: number, umax: num
   let singular: [number, number][];
   if (curve.landmarks) {
     const shift = fr.ox - fr.worldShear * fr.oy;
-    critical = curve.landmarks.critical.map((u) => (u - shift) / fr.scaleX);
-    singular = curve.landmarks.singular.map(([x, y]) => worldToFrame(fr, x, y));
+    const toFrame = (u: number): number => (u - shift) / fr.scaleX;
+    critical = curve.landmarks.critical.map(toFrame).filter((u) => u > umin && u < umax);
+    const known = curve.landmarks.singular;
+    singular = known
+      ? known.map(([x, y]) => worldToFrame(fr, x, y))
+      : singularOnLines(fr, (curve.landmarks.singularLines ?? curve.landmarks.critical).map(toFrame).filter((u) => u > umin && u < umax));
   } else {
     const found = criticalFloatSearch(fr, umin, umax);
     critical = found.abscissae;

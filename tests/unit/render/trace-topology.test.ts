@@ -3,6 +3,8 @@
 // curve, consecutive vertices at most 2 px apart, and no piece coming back over another.
 import { describe, expect, it } from 'vitest';
 import { curvePrepare, curveTrace } from '../../../shaders-free-render/trace.ts';
+import { curveLandmarks } from '../../../src/poly/curve-landmarks.ts';
+import { formParse } from '../../../src/poly/parse.ts';
 import { TOPOLOGY_CASES, caseForm, caseView } from './curve-table.ts';
 import { affineEvaluator, singularEndsAt, traceFaults } from './trace-check.ts';
 
@@ -11,10 +13,13 @@ describe('tracer topology on the curve table', () => {
     expect(TOPOLOGY_CASES.length).toBeGreaterThanOrEqual(40);
   });
   for (const c of TOPOLOGY_CASES) {
-    it(`${c.name}: ${c.eq} (${c.source})`, () => {
+    const exact = c.scale === undefined && c.stretch === undefined;
+    for (const withLandmarks of exact ? [false, true] : [false]) {
+    it(`${c.name}: ${c.eq} (${c.source})${withLandmarks ? ', exact landmarks' : ''}`, () => {
       const form = caseForm(c);
       const view = caseView(c);
-      const tr = curveTrace(curvePrepare(form), view);
+      const lm = withLandmarks ? curveLandmarks(formParse(c.eq).form) : null;
+      const tr = curveTrace(curvePrepare(form, lm), view);
       const summary = {
         open: tr.polylines.filter((p) => !p.closed).length,
         closed: tr.polylines.filter((p) => p.closed).length,
@@ -34,5 +39,6 @@ describe('tracer topology on the curve table', () => {
       expect(faults.worstGapPx, 'gap between consecutive vertices (px)').toBeLessThanOrEqual(2);
       expect(faults.closeApproaches, 'pieces coming within half a pixel of each other').toBe(0);
     });
+    }
   }
 });
