@@ -11,6 +11,8 @@ import { weierstrass } from './verbs/weierstrass.ts';
 import { meet } from './verbs/meet.ts';
 import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
+import { figure } from './verbs/figure.ts';
+import { trials } from './verbs/trials.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
@@ -24,4 +26,6 @@ export const VERBS: readonly Verb[] = [
   meet,
   ninth,
   nine,
+  figure,
+  trials,
 ];
