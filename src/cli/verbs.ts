@@ -13,6 +13,8 @@ import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
 import { figure } from './verbs/figure.ts';
 import { trials } from './verbs/trials.ts';
+import { curve } from './verbs/curve.ts';
+import { parametrise } from './verbs/parametrise.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
@@ -28,4 +30,6 @@ export const VERBS: readonly Verb[] = [
   nine,
   figure,
   trials,
+  curve,
+  parametrise,
 ];

@@ -3,5 +3,6 @@ import type { BenchSuite } from './bench.ts';
 import { formsBench } from './forms.bench.ts';
 import { gcdBench, rootsBench } from './roots.bench.ts';
 import { nineBench } from './nine.bench.ts';
+import { curveBench } from './curve.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench];

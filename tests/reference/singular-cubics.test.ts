@@ -1,0 +1,129 @@
+// Singular points and components of cubics against Singular, live, in one run: seeded singular and
+// reducible cubics of every configuration (normal forms of our own moved by random unimodular matrices,
+// tests/unit/cubic/singular-samples.ts) and seeded random dense cubics.
+//
+// Singular computes, independently of our code: the saturated Jacobian ideal sat(jacob(F), m) (its
+// dimension, its degree = Σ τ over the singular points, and the degree of its radical = how many
+// singular points over C), factorize(F) over Q (component degrees and multiplicities), and at each of our
+// rational singular points, moved to the origin of an affine chart in a local ring (ds): the order
+// (multiplicity), milnor, tjurina (sing.lib) and factorize of the tangent cone jet(g, ord g) — which
+// decides our split test (two rational lines, a quadratic irreducible over Q, a double line). The kind
+// follows from (order, μ): A1 node (2, 1), A2 cusp (2, 2), A3 tacnode (2, 3), D4 ordinary triple point
+// (3, 4) (Arnold's list; Greuel, Lossen, Shustin, Introduction to Singularities and Deformations, I.2).
+import { describe, expect, it } from 'vitest';
+import { seededRandom, singular } from './oracles.ts';
+import { formToText } from '../../src/poly/print.ts';
+import { monomials, formPrimitive, type Form } from '../../src/poly/form.ts';
+import { cubicSingularPoints, type CubicSingularities, type SingularPoint } from '../../src/cubic/singular.ts';
+import { SAMPLE_FAMILIES, singularSample } from '../unit/cubic/singular-samples.ts';
+
+function singularPoly(f: Form): string {
+  const terms = monomials(f.degree)
+    .map(([i, j, k], n) => (f.coeffs[n] === 0n ? '' : `(${f.coeffs[n]})*x^${i}*y^${j}*z^${k}`))
+    .filter((t) => t !== '');
+  return terms.join('+') || '0';
+}
+
+/** The affine chart substitution moving P to the origin: X_k = P_k, the others P_i + P_k·x, P_j + P_k·y. */
+function chart(p: readonly bigint[]): string {
+  const k = p[2] !== 0n ? 2 : p[1] !== 0n ? 1 : 0;
+  const others = [0, 1, 2].filter((i) => i !== k);
+  const sub = ['', '', ''];
+  sub[k] = `${p[k]}`;
+  sub[others[0]] = `(${p[others[0]]})+(${p[k]})*x`;
+  sub[others[1]] = `(${p[others[1]]})+(${p[k]})*y`;
+  return sub.join(', ');
+}
+
+const PRELUDE = `LIB "elim.lib"; LIB "primdec.lib"; LIB "sing.lib";
+ring r = 0,(x,y,z),dp;
+proc rep(poly f, int n) { ideal J = jacob(f); def S0 = sat(J, maxideal(1)); ideal S = S0[1]; ideal Ss = std(S);
+  list fa = factorize(f); string s = "C " + string(n) + " " + string(dim(Ss)) + " " + string(mult(Ss)) + " " + string(mult(std(radical(S)))) + " F";
+  int i; for (i = 1; i <= size(fa[1]); i++) { if (deg(fa[1][i]) > 0) { s = s + " " + string(deg(fa[1][i])) + "^" + string(fa[2][i]); } }
+  print(s); }
+proc loc(poly f, int n, int k, poly a, poly b, poly c) { map m = basering, a, b, c; poly h = m(f); def R0 = basering;
+  ring rl2 = 0,(x,y),ds; poly g = imap(R0, h); list tc = factorize(jet(g, ord(g)));
+  string s = "P " + string(n) + " " + string(k) + " " + string(ord(g)) + " " + string(milnor(g)) + " " + string(tjurina(g)) + " T";
+  int i; for (i = 1; i <= size(tc[1]); i++) { if (deg(tc[1][i]) > 0) { s = s + " " + string(deg(tc[1][i])) + "^" + string(tc[2][i]); } }
+  print(s); }
+`;
+
+/** What Singular's factorisation of the tangent cone must look like for our answer at a rational point. */
+function expectedCone(p: SingularPoint): string {
+  if (p.kind === 'cusp' || p.kind === 'tacnode') return '1^2';
+  return p.tangents.map((t) => `${t.degree}^1`).sort().join(' ');
+}
+
+function expectedComponents(s: CubicSingularities): string {
+  return s.components.components.map((c) => `${c.form.degree}^${c.multiplicity}`).sort().join(' ');
+}
+
+const ORDER_MILNOR: Record<string, [number, number]> = { node: [2, 1], cusp: [2, 2], tacnode: [2, 3], 'triple point': [3, 4] };
+
+function randomCubic(rand: () => number): Form {
+  const coeffs = Array.from({ length: 10 }, () => BigInt(Math.floor(rand() * 41) - 20));
+  if (coeffs.every((c) => c === 0n)) coeffs[0] = 1n;
+  return formPrimitive({ degree: 3, coeffs });
+}
+
+describe('singular points of cubics agree with Singular (live)', () => {
+  const seed = 31337;
+  it(`${SAMPLE_FAMILIES * 6} configured cubics and 12 random cubics (seed ${seed})`, () => {
+    const rand = seededRandom(seed);
+    const curves: { curve: Form; family: string }[] = [];
+    for (let n = 0; n < SAMPLE_FAMILIES * 6; n++) {
+      const s = singularSample(rand, n);
+      curves.push({ curve: s.curve, family: s.family });
+    }
+    for (let n = 0; n < 12; n++) curves.push({ curve: randomCubic(rand), family: 'random dense' });
+    const ours = curves.map((c) => cubicSingularPoints(c.curve));
+    let script = PRELUDE;
+    curves.forEach((c, n) => {
+      const poly = singularPoly(c.curve);
+      script += `rep(${poly}, ${n});\n`;
+      ours[n].points.forEach((p, k) => {
+        if (p.point) script += `loc(${poly}, ${n}, ${k}, ${chart(p.point)});\n`;
+      });
+    });
+    const lines = singular(script, 120_000);
+    const byKey = new Map<string, string[]>();
+    for (const l of lines) {
+      const parts = l.trim().split(/\s+/);
+      if (parts[0] === 'C') byKey.set(`C ${parts[1]}`, parts.slice(2));
+      else if (parts[0] === 'P') byKey.set(`P ${parts[1]} ${parts[2]}`, parts.slice(3));
+    }
+    let checkedPoints = 0;
+    curves.forEach((c, n) => {
+      const ctx = `seed ${seed}, curve ${n} (${c.family}): ${formToText(c.curve)}`;
+      const s = ours[n];
+      const rep = byKey.get(`C ${n}`);
+      expect(rep, `${ctx}: no answer from Singular; output was ${lines.slice(0, 5).join(' | ')}`).toBeDefined();
+      const [dim, degree, points, , ...factors] = rep!;
+      expect(factors.sort().join(' '), `${ctx}: components`).toBe(expectedComponents(s));
+      if (s.lines.length > 0) {
+        expect(Number(dim), `${ctx}: a singular line`).toBe(2);
+        return;
+      }
+      if (s.smooth) {
+        expect(Number(dim), `${ctx}: smooth`).toBeLessThanOrEqual(0);
+        return;
+      }
+      expect(Number(dim), ctx).toBe(1);
+      expect(Number(degree), `${ctx}: Σ τ`).toBe(s.points.reduce((a, p) => a + p.tjurina, 0));
+      expect(Number(points), `${ctx}: number of singular points`).toBe(s.points.length);
+      s.points.forEach((p, k) => {
+        if (!p.point) return;
+        const loc = byKey.get(`P ${n} ${k}`);
+        expect(loc, `${ctx}: point ${k}`).toBeDefined();
+        const [ord, milnor, tjurina, , ...cone] = loc!;
+        const pctx = `${ctx}: point ${p.point.join(':')} (${p.kind})`;
+        expect([Number(ord), Number(milnor)], pctx).toEqual(ORDER_MILNOR[p.kind]);
+        expect(Number(milnor), pctx).toBe(p.milnor);
+        expect(Number(tjurina), pctx).toBe(p.tjurina);
+        expect(cone.sort().join(' '), `${pctx}: tangent cone over Q`).toBe(expectedCone(p));
+        checkedPoints++;
+      });
+    });
+    expect(checkedPoints).toBeGreaterThan(50);
+  }, 180_000);
+});
