@@ -15,6 +15,7 @@ import { figure } from './verbs/figure.ts';
 import { trials } from './verbs/trials.ts';
 import { curve } from './verbs/curve.ts';
 import { parametrise } from './verbs/parametrise.ts';
+import { trace } from './verbs/trace.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
@@ -32,4 +33,5 @@ export const VERBS: readonly Verb[] = [
   trials,
   curve,
   parametrise,
+  trace,
 ];
