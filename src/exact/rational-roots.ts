@@ -9,6 +9,10 @@
 //     over Z (Gauss), so modulo a prime l not dividing a with f mod l square-free, distinct rational roots
 //     stay distinct roots in F_l. N = min over a few such primes of #roots in F_l. N = 0 ends the search.
 //  2. Isolate the real roots exactly (root-isolation.ts) and refine them together, doubling precision.
+//  2'. Before isolating, candidates from floating approximations of the roots (Aberth's method): each
+//     convergent of an approximately real root is checked exactly. If as many roots are verified as the
+//     bound of step 1 allows, the search is already complete; otherwise steps 2–3 run on the intervals
+//     not yet accounted for. Floats only propose; nothing is accepted without the exact check.
 //  3. A rational root u/v has v | a, so v <= |a|. Once a root's interval is narrower than 1/(2a²), any point x
 //     of it has |x − u/v| < 1/(2v²), so u/v is a convergent of x (Legendre; Hardy & Wright, "An Introduction
 //     to the Theory of Numbers", Thm 184) — the last convergent with denominator <= |a|. It is tested exactly
@@ -19,7 +23,8 @@ import { bigAbs, bitLength } from './integer.ts';
 import { rat, ratCmp, type Rational } from './rational.ts';
 import { RootRefiner } from './root-refine.ts';
 import { upolyRealRootIntervals } from './root-isolation.ts';
-import { FILTER_PRIMES, modPolyDerivative, modPolyGcd, modPolyReduce, modPolyRootCount } from './upoly-mod.ts';
+import { COUNT_PRIMES, modPolyDerivative, modPolyGcd, modPolyReduce, modPolyRootCount } from './upoly-mod.ts';
+import { upolyFloatRoots } from './float-roots.ts';
 import { upolyEvalHomogeneous, upolySquarefreeFactorisation, type UPoly } from './upoly.ts';
 
 export interface RationalRoot {
@@ -27,23 +32,44 @@ export interface RationalRoot {
   readonly multiplicity: number;
 }
 
-/** How many good primes the bound of step 1 tries before settling for the smallest count seen. */
-const BOUND_PRIMES = 6;
+/** How many good primes the bound of step 1 tries at most. */
+const BOUND_PRIMES = 10;
+
+/**
+ * Step 1's bound, tightened one good prime at a time (each costs ~16 squarings modulo a 16-bit prime), so
+ * the search pays for more primes only while it has not yet found as many roots as the bound allows.
+ * Assumes f primitive, square-free, deg >= 1.
+ */
+class RationalRootBound {
+  best: number;
+  private next = 0;
+  private used = 0;
+
+  constructor(private readonly f: readonly bigint[]) {
+    this.best = f.length - 1;
+  }
+
+  /** Tries one more good prime; false when the budget is spent. */
+  tighten(): boolean {
+    const lead = this.f[this.f.length - 1];
+    while (this.used < BOUND_PRIMES && this.next < COUNT_PRIMES.length) {
+      const l = COUNT_PRIMES[this.next++];
+      if (lead % BigInt(l) === 0n) continue;
+      const fl = modPolyReduce(this.f, l);
+      if (modPolyGcd(fl, modPolyDerivative(fl, l), l).length !== 1) continue;
+      this.used++;
+      this.best = Math.min(this.best, modPolyRootCount(fl, l));
+      return true;
+    }
+    return false;
+  }
+}
 
 /** Upper bound on the number of distinct rational roots of f. Assumes f primitive, square-free, deg >= 1. */
 export function upolyRationalRootBound(f: readonly bigint[]): number {
-  const d = f.length - 1;
-  const lead = f[d];
-  let best = d;
-  let used = 0;
-  for (const l of FILTER_PRIMES) {
-    if (lead % BigInt(l) === 0n) continue;
-    const fl = modPolyReduce(f, l);
-    if (modPolyGcd(fl, modPolyDerivative(fl, l), l).length !== 1) continue;
-    best = Math.min(best, modPolyRootCount(fl, l));
-    if (best === 0 || ++used >= BOUND_PRIMES) break;
-  }
-  return best;
+  const b = new RationalRootBound(f);
+  while (b.best > 0 && b.tighten());
+  return b.best;
 }
 
 /**
@@ -76,8 +102,13 @@ function isRootOf(f: readonly bigint[], c: Rational): boolean {
   return upolyEvalHomogeneous(f, c.num, c.den) === 0n;
 }
 
+export interface RationalRootOptions {
+  /** Use floating candidates before isolating (default true); false runs the exact steps alone (tests). */
+  readonly floatCandidates?: boolean;
+}
+
 /** Distinct rational roots of f. Assumes f primitive and square-free with deg f >= 1. */
-export function upolySquarefreeRationalRoots(f: readonly bigint[]): Rational[] {
+export function upolySquarefreeRationalRoots(f: readonly bigint[], options: RationalRootOptions = {}): Rational[] {
   const d = f.length - 1;
   if (d === 1) return [rat(-f[0], f[1])];
   const found: Rational[] = [];
@@ -86,26 +117,37 @@ export function upolySquarefreeRationalRoots(f: readonly bigint[]): Rational[] {
     found.push(rat(0n));
     g = g.slice(1);
     if (g.length === 1) return found;
+    if (g.length === 2) return [...found, rat(-g[0], g[1])].sort(ratCmp);
   }
-  const bound = upolyRationalRootBound(g);
-  if (bound === 0) return found;
-  let want = bound;
+  const bound = new RationalRootBound(g);
+  bound.tighten();
+  if (bound.best === 0) return found;
+  // Cheap candidates first: convergents of floating approximations, each verified exactly. When as many
+  // are found as the modular bound allows, the search is complete without isolating anything.
+  const early = options.floatCandidates === false ? [] : floatCandidateRoots(g);
+  let count = early.length; // rational roots of g found so far
+  found.push(...early);
+  while (count < bound.best && bound.tighten());
+  if (count >= bound.best) return found.sort(ratCmp);
   const lead = bigAbs(g[g.length - 1]);
   const fullBits = 2 * bitLength(lead) + 2; // 2^-fullBits < 1/(2·lead²)
   const open: RootRefiner[] = [];
-  for (const iv of upolyRealRootIntervals(g)) {
+  const intervals = upolyRealRootIntervals(g);
+  bound.best = Math.min(bound.best, intervals.length);
+  for (const iv of intervals) {
+    if (early.some((q) => ratCmp(iv.lo, q) <= 0 && ratCmp(q, iv.hi) <= 0)) continue; // already found
     if (ratCmp(iv.lo, iv.hi) === 0) {
       if (isRootOf(g, iv.lo)) {
         found.push(iv.lo);
-        want--;
+        count++;
       }
     } else open.push(new RootRefiner(g, iv.lo, iv.hi));
   }
-  for (let bits = 24; want > 0 && open.length > 0; bits = Math.min(2 * bits, fullBits)) {
+  for (let bits = 24; count < bound.best && open.length > 0; bits = Math.min(2 * bits, fullBits)) {
     const last = bits >= fullBits;
     // Denominators v with 2v² < 2^bits are decided at this width.
     const denBound = last ? lead : minBig(lead, 1n << BigInt(Math.max(0, (bits - 2) >> 1)));
-    for (let i = 0; i < open.length && want > 0; i++) {
+    for (let i = 0; i < open.length && count < bound.best; i++) {
       const r = open[i];
       r.refineToBits(bits);
       let cand: Rational;
@@ -116,13 +158,66 @@ export function upolySquarefreeRationalRoots(f: readonly bigint[]): Rational[] {
       }
       if (isRootOf(g, cand)) {
         found.push(cand);
-        want--;
+        count++;
         open.splice(i--, 1);
       } else if (last || r.exact) open.splice(i--, 1);
     }
     if (last) break;
+    // Before paying for finer widths, see whether another prime shows that the search is complete.
+    while (count < bound.best && bound.tighten() && count < bound.best);
   }
   return found.sort(ratCmp);
+}
+
+/** An exact dyadic m/2^k equal to the double x (finite). */
+function dyadicOfDouble(x: number): { m: bigint; k: number } {
+  if (x === 0) return { m: 0n, k: 0 };
+  const k = Math.max(0, 52 - Math.floor(Math.log2(Math.abs(x))));
+  return { m: BigInt(Math.round(x * 2 ** k)), k };
+}
+
+/** All convergents of m/2^k with denominator <= bound. */
+function convergents(m: bigint, k: number, bound: bigint): Rational[] {
+  const out: Rational[] = [];
+  let [p0, q0, p1, q1] = [0n, 1n, 1n, 0n];
+  let [x, y] = [m, 1n << BigInt(k)];
+  for (;;) {
+    let a = x / y;
+    if (x % y !== 0n && x < 0n) a -= 1n;
+    const p2 = a * p1 + p0;
+    const q2 = a * q1 + q0;
+    if (q2 > bound) break;
+    out.push({ num: p2, den: q2 });
+    [p0, q0, p1, q1] = [p1, q1, p2, q2];
+    const r = x - a * y;
+    if (r === 0n) break;
+    [x, y] = [y, r];
+  }
+  return out;
+}
+
+/**
+ * Rational roots of g among the convergents (denominator <= min(|lead|, 2^40)) of its approximately real
+ * floating roots, each verified exactly: a sound subset of the rational roots, usually all of them.
+ * Assumes g primitive, square-free, g(0) != 0, deg >= 2.
+ */
+function floatCandidateRoots(g: readonly bigint[]): Rational[] {
+  const lead = bigAbs(g[g.length - 1]);
+  const cap = minBig(lead, 1n << 40n);
+  const { re, im } = upolyFloatRoots(g);
+  const out: Rational[] = [];
+  for (let i = 0; i < re.length; i++) {
+    const x = re[i];
+    if (!Number.isFinite(x) || !(Math.abs(im[i]) <= 1e-6 * Math.abs(x) + 1e-300)) continue;
+    const { m, k } = dyadicOfDouble(x);
+    for (const c of convergents(m, k, cap)) {
+      if (isRootOf(g, c)) {
+        if (!out.some((q) => q.num === c.num && q.den === c.den)) out.push(c);
+        break;
+      }
+    }
+  }
+  return out;
 }
 
 function minBig(a: bigint, b: bigint): bigint {
@@ -130,11 +225,11 @@ function minBig(a: bigint, b: bigint): bigint {
 }
 
 /** Every rational root of p with its multiplicity, in increasing order. The zero polynomial is refused. */
-export function upolyRationalRoots(p: readonly bigint[]): RationalRoot[] {
+export function upolyRationalRoots(p: readonly bigint[], options: RationalRootOptions = {}): RationalRoot[] {
   if (p.length === 0) throw new InvalidInput('the zero polynomial vanishes at every rational', 'polynomial');
   const out: RationalRoot[] = [];
   for (const { factor, multiplicity } of upolySquarefreeFactorisation(p)) {
-    for (const root of upolySquarefreeRationalRoots(factor)) out.push({ root, multiplicity });
+    for (const root of upolySquarefreeRationalRoots(factor, options)) out.push({ root, multiplicity });
   }
   return out.sort((a, b) => ratCmp(a.root, b.root));
 }

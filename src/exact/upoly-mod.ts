@@ -82,35 +82,54 @@ export function modPolyDerivative(p: readonly number[], l: number): ModPoly {
   return trim(r);
 }
 
-function modPolyMulRem(a: readonly number[], b: readonly number[], m: readonly number[], l: number): ModPoly {
-  if (a.length === 0 || b.length === 0) return [];
-  const r = new Array<number>(a.length + b.length - 1).fill(0);
-  for (let i = 0; i < a.length; i++) {
-    if (a[i] === 0) continue;
-    for (let j = 0; j < b.length; j++) r[i + j] = (r[i + j] + mulMod(a[i], b[j], l)) % l;
-  }
-  return modPolyRem(trim(r), m, l);
-}
+/** Primes just below 2^16 for root counting: x^l mod f needs only 16 squarings, and every sum of d
+ * products of residues stays far below 2^53. */
+export const COUNT_PRIMES: readonly number[] = [
+  65521, 65519, 65497, 65479, 65449, 65447, 65437, 65423, 65419, 65413, 65407, 65393, 65381, 65371, 65357, 65353,
+];
 
 /**
- * Number of distinct roots of p in F_l: deg gcd(x^l - x, p) (common practice; Cohen, "A Course in
- * Computational Algebraic Number Theory", §3.4.1). Assumes deg p >= 1.
+ * Number of distinct roots of p in F_l: deg gcd(x^l − x, p) (common practice; Cohen, "A Course in
+ * Computational Algebraic Number Theory", §3.4.1). Assumes deg p >= 1 and l < 2^20.
  */
 export function modPolyRootCount(p: readonly number[], l: number): number {
   const f = makeMonic(p.slice(), l);
-  if (f.length === 2) return 1;
-  // x^l mod f by square-and-multiply.
-  let result: ModPoly = [1];
-  let base: ModPoly = modPolyRem([0, 1], f, l);
-  let e = l;
-  while (e > 0) {
-    if (e & 1) result = modPolyMulRem(result, base, f, l);
-    e = Math.floor(e / 2);
-    if (e > 0) base = modPolyMulRem(base, base, f, l);
+  const d = f.length - 1;
+  if (d === 1) return 1;
+  // x^l mod f, left-to-right binary powering; multiplying by x is a shift and one reduction step.
+  let r = new Float64Array(d);
+  r[1 % d] = d === 1 ? 0 : 1;
+  const prod = new Float64Array(2 * d - 1);
+  const topBit = 31 - Math.clz32(l);
+  for (let bit = topBit - 1; bit >= 0; bit--) {
+    prod.fill(0);
+    for (let i = 0; i < d; i++) {
+      const a = r[i];
+      if (a === 0) continue;
+      for (let j = 0; j < d; j++) prod[i + j] += a * r[j];
+    }
+    for (let k = 2 * d - 2; k >= 0; k--) prod[k] %= l;
+    for (let k = 2 * d - 2; k >= d; k--) {
+      const c = prod[k] % l;
+      if (c === 0) continue;
+      for (let j = 0; j < d; j++) prod[k - d + j] -= c * f[j];
+      // keep the lower entries bounded so later products stay exact
+      for (let j = 0; j < d; j++) prod[k - d + j] %= l;
+    }
+    const next = new Float64Array(d);
+    for (let k = 0; k < d; k++) next[k] = ((prod[k] % l) + l) % l;
+    r = next;
+    if ((l >> bit) & 1) {
+      // r·x mod f
+      const top = r[d - 1];
+      for (let k = d - 1; k >= 1; k--) r[k] = r[k - 1];
+      r[0] = 0;
+      if (top !== 0) for (let j = 0; j < d; j++) r[j] = (((r[j] - top * f[j]) % l) + l) % l;
+    }
   }
-  const xl = result.slice();
+  const xl: number[] = Array.from(r);
   while (xl.length < 2) xl.push(0);
   xl[1] = (xl[1] - 1 + l) % l;
   const g = modPolyGcd(f, trim(xl), l);
-  return g.length === 0 ? f.length - 1 : g.length - 1;
+  return g.length === 0 ? d : g.length - 1;
 }

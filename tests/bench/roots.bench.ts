@@ -48,22 +48,22 @@ function pariMs(setup: string, loop: string, reps: number): number {
   return Number(out[out.length - 1]) / reps;
 }
 
-function rootsFigure(digits: number, count: number, reps: number): BenchFigure {
+function rootsFigure(digits: number, count: number, reps: number, floatCandidates = true): BenchFigure {
   const set = rootsBenchSet(9000 + digits, count, digits);
   // Same answers first: a benchmark of wrong answers would be meaningless.
   const ours = set.map((p) => upolyRationalRoots(p).map((r) => ratToString(r.root)).sort().join(' '));
   const theirs = gp(`v=[${set.map(gpPoly).join(',')}];\nfor(i=1,#v, my(s=""); my(r=nfroots(,v[i])); for(j=1,#r, s=Str(s, r[j], " ")); print(s))`);
   const mismatch = ours.findIndex((o, i) => o !== (theirs[i] ?? '').trim().split(/\s+/).filter(Boolean).sort().join(' '));
   if (mismatch >= 0) throw new Error(`rational roots disagree with PARI nfroots at case ${mismatch} (seed ${9000 + digits})`);
-  const perPoly = set.map((p) => medianMs(() => upolyRationalRoots(p), reps, 1));
+  const perPoly = set.map((p) => medianMs(() => upolyRationalRoots(p, { floatCandidates }), reps, 1));
   const ninefoldMs = median(perPoly);
   // PARI: median over the set of the per-polynomial time, each timed over `reps` calls inside gp.
   const pariTimes = gp(
-    `v=[${set.map(gpPoly).join(',')}];\nfor(i=1,#v, gettime(); for(r=1,${reps * 4}, nfroots(,v[i])); print(gettime()/${reps * 4}.))`,
+    `v=[${set.map(gpPoly).join(',')}];\nfor(i=1,#v, gettime(); for(r=1,${reps * 40}, nfroots(,v[i])); print(gettime()/${reps * 40}.))`,
   ).map(Number);
   const pariMsMedian = median(pariTimes);
   return {
-    label: `rational roots of degree-9 polynomials, ${digits}-digit coefficients (${count} polynomials, median per polynomial; PARI nfroots(,p))`,
+    label: `rational roots of degree-9 polynomials, ${digits}-digit coefficients (${count} polynomials, median per polynomial; PARI nfroots(,p))${floatCandidates ? '' : ', exact steps only (no floating candidates)'}`,
     values: { ninefoldMs, pariMs: pariMsMedian, ratio: ninefoldMs / pariMsMedian },
   };
 }
@@ -71,7 +71,7 @@ function rootsFigure(digits: number, count: number, reps: number): BenchFigure {
 export const rootsBench: BenchSuite = {
   name: 'rational roots',
   async run(): Promise<BenchFigure[]> {
-    return [rootsFigure(50, 40, 9), rootsFigure(500, 20, 5)];
+    return [rootsFigure(50, 40, 9), rootsFigure(500, 20, 5), rootsFigure(50, 40, 5, false), rootsFigure(500, 20, 3, false)];
   },
 };
 

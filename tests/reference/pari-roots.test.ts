@@ -113,6 +113,9 @@ describe('exact roots against PARI/GP (factor, polsturm, polresultant, poldisc)'
       const theirs = (roots.get(i) ?? []).sort();
       if (ours.length > 0) withRoots++;
       expect(ours, where).toEqual(theirs);
+      // The exact steps alone (no floating candidates) must find the same roots.
+      const exactOnly = upolyRationalRoots(p, { floatCandidates: false }).map((r) => `${ratToString(r.root)}^${r.multiplicity}`).sort();
+      expect(exactOnly, `${where} (exact steps only)`).toEqual(theirs);
       const ourSqf = upolySquarefreeFactorisation(p).map((f) => `${f.multiplicity}:${f.factor.join(',')}`).sort();
       expect(ourSqf, where).toEqual((sqf.get(i) ?? []).sort());
       expect(String(upolyRealRootCount(p)), where).toBe(sturm.get(i));
