@@ -11,13 +11,14 @@
 // e·y² + b·xy + c·y = A·x³ + p·x² + q·x + r becomes integral and monic with X = A·e·x, Y = A·e²·y.
 //
 // The forward map sends O to the point at infinity and is a group isomorphism from the law with base O
-// (src/cubic/group.ts) to the usual law on the model; the inverse is a point construction: the line
-// L' − xT through O' (flex case: the inverse of the linear map) and the one point of it with that image.
+// (src/cubic/group.ts) to the usual law on the model. The inverse is a point construction: x fixes the
+// line L' − xT through O'; on it P = s·O' + D, and since T and T' pass through O', y = T'M/T² is linear
+// in s (flex case: the inverse of the linear map).
 //
 // Canonical form: the maps go to `a`, the reduced global minimal model (PARI's ellminimalmodel form); the
 // integral model read off the relation is kept in `construction` with the change (u, r, s, t) to `a`.
 import { Degenerate, NinefoldError, NotOnCurve } from '../exact/errors.ts';
-import { content, isqrt } from '../exact/integer.ts';
+import { content } from '../exact/integer.ts';
 import { gcd } from '../exact/gcd.ts';
 import { matKernel } from '../exact/linalg.ts';
 import { rat, ratAdd, ratDiv, ratEq, ratMul, ratNeg, ratToString, type Rational } from '../exact/rational.ts';
@@ -56,6 +57,8 @@ export interface WeierstrassModel {
   readonly construction: {
     readonly a: AInvariants;
     readonly scale: bigint;
+    /** y there is yScale·(secondTangent·yLine/tangent²) (non-flex) or yScale·yLine/tangent (flex). */
+    readonly yScale: bigint;
     readonly forward: readonly [Form, Form, Form];
     readonly toMinimal: CoordinateChange;
   };
@@ -162,7 +165,7 @@ export function weierstrassModel(f: Form, o: Point): WeierstrassModel {
     short: { A: -27n * mq.c4, B: -54n * mq.c6 },
     forward: formsChange(raw, min.change),
     lines: flex ? { tangent, xLine, yLine } : { tangent, xLine, yLine, second: o2, secondTangent },
-    construction: { a, scale, forward: raw, toMinimal: min.change },
+    construction: { a, scale, yScale: scale * e, forward: raw, toMinimal: min.change },
   };
 }
 
@@ -246,12 +249,7 @@ export function weierstrassInverse(model: WeierstrassModel, target: ModelPoint, 
     const pt = [0, 1, 2].map((i) => adj[0][i] * target[0] + adj[1][i] * target[1] + adj[2][i] * target[2]);
     candidates.push(triple(pt[0], pt[1], pt[2]));
   } else {
-    const o2 = model.lines.second!;
-    // x = scale·L'/T, so the point lies on den·scale·L' − num·T, a line through O'.
-    const xl = model.lines.xLine;
-    const tl = model.lines.tangent;
-    const ell = [0, 1, 2].map((i) => image.x.den * model.construction.scale * xl[i] - image.x.num * tl[i]);
-    candidates.push(o2, ...lineOtherPoints(f, ell, o2));
+    candidates.push(...nonFlexInverse(model, image.x, image.y));
   }
   for (const c of candidates) {
     if (formEval(f, c) !== 0n) continue;
@@ -261,32 +259,30 @@ export function weierstrassInverse(model: WeierstrassModel, target: ModelPoint, 
   throw new NinefoldError('internal: the inverse construction found no point', name);
 }
 
-// Assumes o2 on f and on the line ell. The rational points of ell ∩ f besides o2 (as s·o2 + t·D).
-function lineOtherPoints(f: Form, ell: readonly bigint[], o2: Point): Point[] {
+// Assumes a non-flex model. On the line ℓ: den(x)·L' − num(x)·T through O', write P = s·O' + D. Since T and
+// T' pass through O', y = T'M/T² becomes T'(D)(s·M(O') + M(D))/T(D)², linear in s: no square root.
+// When ℓ is the tangent at O' (T'(D) = 0) the points of that x are O' and O' * O'.
+function nonFlexInverse(model: WeierstrassModel, x: Rational, y: Rational): Point[] {
+  const { xLine, tangent, yLine } = model.lines;
+  const o2 = model.lines.second!;
+  const t2 = model.lines.secondTangent!;
+  const c = model.construction;
+  // x on the construction model is scale·L'/T and y is yScale·T'M/T².
+  const xn = x.num;
+  const xd = x.den * c.scale;
+  const ell = [0, 1, 2].map((i) => xd * xLine[i] - xn * tangent[i]);
   let d: readonly bigint[] = [0n, 0n, 0n];
   for (const e of UNIT) {
     d = cross(ell, e);
     if (!tripleIsZero(d) && !tripleProportional(d, o2)) break;
   }
-  // F(s·o2 + t·D) = t·(α s² + β s t + γ t²).
-  const alpha = dot(d, cubicGradientAt(f, o2));
-  const beta = dot(o2, cubicGradientAt(f, d));
-  const gamma = formEval(f, d as unknown as Point);
-  const out: Point[] = [];
-  const push = (s: bigint, t: bigint) => {
-    const v = [s * o2[0] + t * d[0], s * o2[1] + t * d[1], s * o2[2] + t * d[2]];
-    if (!tripleIsZero(v)) out.push(triple(v[0], v[1], v[2]));
-  };
-  if (alpha === 0n) {
-    if (beta !== 0n || gamma !== 0n) push(-gamma, beta);
-    return out;
-  }
-  const disc = beta * beta - 4n * alpha * gamma;
-  if (disc < 0n) return out;
-  const sq = isqrt(disc);
-  if (sq * sq !== disc) return out;
-  push(-beta + sq, 2n * alpha);
-  push(-beta - sq, 2n * alpha);
-  return out;
+  const tD = dot(tangent, d);
+  const t2D = dot(t2, d);
+  if (t2D === 0n) return [o2, tangentThird(model.curve, o2)];
+  const yn = y.num;
+  const yd = y.den * c.yScale;
+  const s = yn * tD * tD - yd * t2D * dot(yLine, d);
+  const t = yd * t2D * dot(yLine, o2);
+  const v = [s * o2[0] + t * d[0], s * o2[1] + t * d[1], s * o2[2] + t * d[2]];
+  return tripleIsZero(v) ? [] : [triple(v[0], v[1], v[2])];
 }
-
