@@ -4,5 +4,6 @@ import { formsBench } from './forms.bench.ts';
 import { gcdBench, rootsBench } from './roots.bench.ts';
 import { nineBench } from './nine.bench.ts';
 import { curveBench } from './curve.bench.ts';
+import { traceBench } from './trace.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench];
