@@ -16,6 +16,7 @@ import { binaryFormRoots } from '../poly/binary-roots.ts';
 import { binaryIsZero } from '../poly/binary.ts';
 import { formAdd, formGradient, formGradientAt, formPrimitive, formScale, type Form } from '../poly/form.ts';
 import { formResultant } from '../poly/resultant.ts';
+import { formTransform, pointTransform, unimodularTrial } from '../poly/transform.ts';
 import { formOnLine } from '../poly/substitute.ts';
 import { pointApprox, type Approx } from './approx.ts';
 import { jacobianDual } from './jacobian.ts';
@@ -97,34 +98,45 @@ function singularOnVertical(f: Form, grads: readonly Form[], x: bigint, z: bigin
   return out;
 }
 
+/**
+ * Every rational singular point, or null when the partials share a curve (a repeated component). The
+ * formal resultant in Y vanishes when (0:1:0) is on every partial, so coordinates are changed by
+ * unimodular matrices G = F∘M until it does not; points of G go back to F as M·p.
+ */
+function rationalSingularPoints(f: Form): Point[] | null {
+  for (let trial = 0; trial < 8; trial++) {
+    const m = unimodularTrial(trial);
+    const g = trial === 0 ? f : formTransform(f, m);
+    const grads = formGradient(g);
+    for (const [a, b] of [[0n, 0n], [1n, 0n], [0n, 1n], [1n, 2n], [-2n, 3n], [3n, -1n]]) {
+      const r = formResultant(formAdd(grads[0], formScale(grads[2], a)), formAdd(grads[1], formScale(grads[2], b)), 1);
+      if (binaryIsZero(r)) continue;
+      const found: Point[] = [];
+      const add = (p: Point) => {
+        const q = trial === 0 ? p : (pointTransform(p, m) as Point);
+        if (!found.some((x) => tripleEquals(x, q))) found.push(q);
+      };
+      for (const root of binaryFormRoots(r).roots) {
+        if (root.point) for (const p of singularOnVertical(g, grads, root.point[0], root.point[1])) add(p);
+      }
+      if (formGradientAt(g, [0n, 1n, 0n]).every((c) => c === 0n)) add([0n, 1n, 0n]);
+      return found;
+    }
+  }
+  return null;
+}
+
 /** Smoothness, rational singular points and the total Tjurina number of a curve of degree 2..6. */
 export function formSingularPoints(f0: Form): GeneralSingularities {
   const d = f0.degree;
   if (d < 1 || d > 6) throw new InvalidInput(`curves of degree 1 to 6 are handled, got degree ${d}`, 'curve');
   const f = formPrimitive(f0);
-  const grads = formGradient(f);
   const repeatedLines = formLinearFactors(f).lines.filter((l) => l.multiplicity > 1);
   if (d === 1) return { degree: 1, smooth: true, reduced: true, points: [], repeatedLines: [], tjurinaTotal: 0 };
-  let res: bigint[] | null = null;
-  for (const [a, b] of [[0n, 0n], [1n, 0n], [0n, 1n], [1n, 2n], [-2n, 3n], [3n, -1n]]) {
-    const g1 = formAdd(grads[0], formScale(grads[2], a));
-    const g2 = formAdd(grads[1], formScale(grads[2], b));
-    const r = formResultant(g1, g2, 1);
-    if (!binaryIsZero(r)) {
-      res = r;
-      break;
-    }
-  }
-  if (!res) {
+  const found = rationalSingularPoints(f);
+  if (!found) {
     return { degree: d, smooth: false, reduced: false, points: [], repeatedLines: repeatedLines.map((l) => ({ line: l.line, multiplicity: l.multiplicity })), tjurinaTotal: null };
   }
-  const found: Point[] = [];
-  for (const r of binaryFormRoots(res).roots) {
-    if (!r.point) continue;
-    for (const p of singularOnVertical(f, grads, r.point[0], r.point[1])) if (!found.some((q) => tripleEquals(p, q))) found.push(p);
-  }
-  const top: Point = [0n, 1n, 0n];
-  if (formGradientAt(f, top).every((c) => c === 0n)) found.push(top);
   const tjurinaTotal = jacobianDual(f).functionals.length;
   return {
     degree: d,
