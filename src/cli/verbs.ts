@@ -11,6 +11,7 @@ import { weierstrass } from './verbs/weierstrass.ts';
 import { meet } from './verbs/meet.ts';
 import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
+import { points } from './verbs/points.ts';
 import { figure } from './verbs/figure.ts';
 import { trials } from './verbs/trials.ts';
 import { curve } from './verbs/curve.ts';
@@ -29,6 +30,7 @@ export const VERBS: readonly Verb[] = [
   meet,
   ninth,
   nine,
+  points,
   figure,
   trials,
   curve,
