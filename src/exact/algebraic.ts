@@ -108,7 +108,10 @@ function cmpRational(q: Rational, b: RealAlgebraic): -1 | 0 | 1 {
 
 export function algebraicCmp(a: RealAlgebraic, b: RealAlgebraic): -1 | 0 | 1 {
   if (isExact(a)) return cmpRational(a.lo, b);
-  if (isExact(b)) return -cmpRational(b.lo, a) as -1 | 0 | 1;
+  if (isExact(b)) {
+    const c = cmpRational(b.lo, a);
+    return c === 0 ? 0 : c === 1 ? -1 : 1;
+  }
   if (ratCmp(a.hi, b.lo) <= 0) return -1;
   if (ratCmp(b.hi, a.lo) <= 0) return 1;
   const g = upolyGcd(a.poly, b.poly);

@@ -10,7 +10,9 @@ import {
   upolyDiscriminant, upolyMul, upolyPow, upolyResultant, upolySquarefreeFactorisation, upolyTrim, upolyToString,
   type UPoly,
 } from '../../src/exact/upoly.ts';
-import { rat, ratToString } from '../../src/exact/rational.ts';
+import { rat, ratParse, ratToString } from '../../src/exact/rational.ts';
+import { algebraicRealRoots, algebraicToDecimal } from '../../src/exact/algebraic.ts';
+import { ratToDecimal } from '../../src/exact/decimal.ts';
 
 const SEED = Number(process.env.NINEFOLD_SEED ?? 91827);
 
@@ -124,5 +126,27 @@ describe('exact roots against PARI/GP (factor, polsturm, polresultant, poldisc)'
     }
     // The set must exercise the search: many polynomials with rational roots, many without.
     expect(withRoots).toBeGreaterThan(110);
+  });
+  it(`real roots to 30 significant digits agree with PARI polrootsreal at 100 digits (seed ${SEED})`, () => {
+    const rand = seededRandom(SEED + 1);
+    const set: UPoly[] = [];
+    for (let i = 0; i < 40; i++) {
+      const p = randomPoly(rand, 2 + Math.floor(rand() * 8), i < 30 ? 20 : 120);
+      set.push(i % 4 === 0 ? upolyMul(p, [-randomBigInt(rand, 3) || 1n, 7n]) : p);
+    }
+    const lines = gp(['default(realprecision, 100);', ...set.map((p) => `v=polrootsreal(${gpPoly(p)}); s="R"; for(j=1,#v, s=Str(s, ";", v[j])); print(s)`)].join('\n'));
+    for (let i = 0; i < set.length; i++) {
+      const ours = algebraicRealRoots(set[i]).map((a) => algebraicToDecimal(a, 30));
+      const theirs = (lines[i] ?? '').trim().split(';').slice(1).map((t) => {
+        // PARI prints e.g. -1.2345 E-5 or 1.2345; re-round its 100-digit value to 30 digits exactly.
+        const m = /^(-?[0-9.]+)(?:E([-+]?[0-9]+))?$/.exec(t.replace(/\s+/g, ''));
+        if (!m) throw new Error(`unexpected PARI number ${t}`);
+        let q = ratParse(m[1]);
+        const e = Number(m[2] ?? 0);
+        q = e >= 0 ? rat(q.num * 10n ** BigInt(e), q.den) : rat(q.num, q.den * 10n ** BigInt(-e));
+        return ratToDecimal(q, 30);
+      });
+      expect(ours, `seed ${SEED + 1}, case ${i}: p = ${upolyToString(set[i])}`).toEqual(theirs);
+    }
   });
 });

@@ -23,6 +23,13 @@ describe('real algebraic numbers', () => {
     expect(algebraicAsRational(rs[2])).toBeNull();
     expect(algebraicToDecimal(rs[1], 5)).toBe('0.33333');
   });
+  it('a rational on a rounding boundary, given with a reducible polynomial, rounds exactly', () => {
+    const a = algebraicFromInterval(upolyMul([-1n, 8n], [-2n, 0n, 1n]), rat(1n, 10n), rat(1n, 5n)); // 1/8
+    expect(algebraicToDecimal(a, 2)).toBe('0.13');
+    expect(algebraicCmp(a, algebraicFromRational(rat(1n, 8n)))).toBe(0);
+    expect(algebraicCmp(algebraicFromRational(rat(1n, 8n)), a)).toBe(0);
+    expect(algebraicAsRational(a)).toEqual(rat(1n, 8n));
+  });
   it('sign, including zero inside the interval', () => {
     const a = algebraicFromInterval([0n, -2n, 0n, 1n], rat(-1n), rat(1n)); // root 0 of x^3 - 2x
     expect(algebraicSign(a)).toBe(0);
