@@ -208,7 +208,8 @@ function floatCandidateRoots(g: readonly bigint[]): Rational[] {
   const out: Rational[] = [];
   for (let i = 0; i < re.length; i++) {
     const x = re[i];
-    if (!Number.isFinite(x) || !(Math.abs(im[i]) <= 1e-6 * Math.abs(x) + 1e-300)) continue;
+    // A non-zero rational with denominator <= 2^40 has modulus >= 2^-40; g(0) != 0, so tinier x propose nothing.
+    if (!Number.isFinite(x) || Math.abs(x) < 2 ** -60 || !(Math.abs(im[i]) <= 1e-6 * Math.abs(x))) continue;
     const { m, k } = dyadicOfDouble(x);
     for (const c of convergents(m, k, cap)) {
       if (isRootOf(g, c)) {

@@ -74,6 +74,12 @@ describe('upolyRationalRoots', () => {
       { numRuns: 60 },
     );
   });
+  it('roots beyond the double range, tiny and huge (found by the exact steps)', () => {
+    const tiny = upolyMul([-1n, 10n ** 330n], [1n, 0n, 1n]);
+    expect(upolyRationalRoots(tiny)).toEqual([{ root: rat(1n, 10n ** 330n), multiplicity: 1 }]);
+    const huge = upolyMul([-(10n ** 330n), 3n], [2n, 0n, 1n]);
+    expect(upolyRationalRoots(huge)).toEqual([{ root: rat(10n ** 330n, 3n), multiplicity: 1 }]);
+  });
   it('the modular bound never undercounts', () => {
     const p = upolyFromRationalRoots([1n, 2n, 3n].map((n) => ({ root: rat(n, 5n), multiplicity: 1 })));
     expect(upolyRationalRootBound(upolyMul(p, [-2n, 0n, 1n]))).toBeGreaterThanOrEqual(3);
