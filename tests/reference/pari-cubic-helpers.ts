@@ -73,3 +73,13 @@ export function randomPoints(rand: () => number, n: number, size: number): Point
   return out;
 }
 
+
+/** A member Σ λ_i·basis_i of a linear system, one seeded λ_i in [-r, r] per basis form. */
+export function randomMember(rand: () => number, basis: readonly Form[], r: number): Form {
+  const out = new Array<bigint>(basis[0].coeffs.length).fill(0n);
+  for (const b of basis) {
+    const lam = BigInt(Math.floor(rand() * (2 * r + 1)) - r);
+    b.coeffs.forEach((c, j) => (out[j] += lam * c));
+  }
+  return { degree: basis[0].degree, coeffs: out };
+}

@@ -12,7 +12,7 @@ import { formEval, formFromCoeffs, formGradientAt, type Form } from '../../src/p
 import { formParse } from '../../src/poly/parse.ts';
 import { triple, tripleIsZero, type Point } from '../../src/plane/point.ts';
 import { gp, seededRandom } from './oracles.ts';
-import { formToGp, key, MEET_GP, parseMeet, randomPoints } from './pari-cubic-helpers.ts';
+import { formToGp, key, MEET_GP, parseMeet, randomMember, randomPoints } from './pari-cubic-helpers.ts';
 
 function compareMeet(ctx: string, f: Form, g: Form, meet: ReturnType<typeof curveCurveMeet>, pari: ReturnType<typeof parseMeet>): void {
   expect(meet.total, ctx).toBe(f.degree * g.degree);
@@ -41,8 +41,8 @@ describe('meets (PARI/GP polresultant + factor + polsturm, live)', () => {
     }
     for (let k = 0; k < 6; k++) {
       const sys = curvesThroughPoints(3, randomPoints(rand, 4, 5));
-      const pick = () => sys.basis.reduce((acc, b) => acc.map((v, j) => v + BigInt(Math.floor(rand() * 7) - 3) * b.coeffs[j]), new Array<bigint>(10).fill(0n));
-      pairs.push([formFromCoeffs(3, pick()), formFromCoeffs(3, pick())]);
+      const pick = () => randomMember(rand, sys.basis, 3);
+      pairs.push([pick(), pick()]);
     }
     // conic ∩ cubic and a tangency
     pairs.push([formParse('x^2 + y^2 = 25').form, formParse('y^2 = x^3 - 7x + 10').form]);

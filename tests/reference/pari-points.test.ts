@@ -1,16 +1,21 @@
 // Rational points up to a height against PARI/GP, run live (tests/reference/oracles.ts), one gp call per
 // group with many seeded cases batched: ellratpoints (PARI/GP manual, "ellratpoints": all points whose x
 // has naive height <= h) on seeded Weierstrass curves, and an independent brute-force search in PARI
-// (factor of F(X, y, Z) over Q for every (X, Z)) on seeded general cubics.
+// (factor of F(X, y, Z) over Q for every (X, Z)) on seeded general cubics, and ellratpoints again through
+// E4's Weierstrass model (src/cubic/weierstrass.ts) for general cubics.
 import { describe, expect, it } from 'vitest';
 import { cubicRationalPoints } from '../../src/cubic/search.ts';
+import { cubicSingularPoints } from '../../src/cubic/singular.ts';
+import { weierstrassInverse, weierstrassMap, weierstrassModel } from '../../src/cubic/weierstrass.ts';
+import type { ModelPoint } from '../../src/cubic/curve-model.ts';
+import { ratParse, ratToString } from '../../src/exact/rational.ts';
 import { pointHeight } from '../../src/cubic/height.ts';
 import { curvesThroughPoints } from '../../src/plane/linear-system.ts';
 import { formFromCoeffs, type Form } from '../../src/poly/form.ts';
 import { formParse } from '../../src/poly/parse.ts';
-import { triple } from '../../src/plane/point.ts';
+import { triple, type Point } from '../../src/plane/point.ts';
 import { gp, gpVector, randomBigInt, seededRandom } from './oracles.ts';
-import { formToGp, key, randomPoints, rationalTriple } from './pari-cubic-helpers.ts';
+import { formToGp, key, randomMember, randomPoints, rationalTriple } from './pari-cubic-helpers.ts';
 
 describe('rational points up to a height (PARI/GP ellratpoints, live)', () => {
   it('agree with ellratpoints on 30 seeded Weierstrass curves (seed 2026)', () => {
@@ -55,8 +60,8 @@ describe('rational points up to a height (PARI/GP ellratpoints, live)', () => {
     while (curves.length < 8) {
       // cubics through five random small points, so there is something to find
       const sys = curvesThroughPoints(3, randomPoints(rand, 5, 4));
-      const c = sys.basis.reduce((acc, b) => acc.map((v, k) => v + BigInt(Math.floor(rand() * 5) - 2) * b.coeffs[k]), new Array<bigint>(10).fill(0n));
-      if (c.some((v) => v !== 0n)) curves.push(formFromCoeffs(3, c));
+      const f = randomMember(rand, sys.basis, 2);
+      if (f.coeffs.some((v) => v !== 0n)) curves.push(f);
     }
     const script = curves
       .map((f) => {
@@ -72,5 +77,44 @@ describe('rational points up to a height (PARI/GP ellratpoints, live)', () => {
       expect(new Set(ours.points.map(key)), `seed ${seed}, curve ${f.coeffs.join(',')}`).toEqual(pari);
     });
   });
-});
 
+  it('agree with ellratpoints through the Weierstrass model on seeded general cubics through seven points (seed 5): ours map into PARI\'s list, PARI\'s map back onto ours', () => {
+    const seed = 5;
+    const rand = seededRandom(seed);
+    const H = 8n;
+    const cases: { f: Form; model: ReturnType<typeof weierstrassModel>; ours: Point[]; h: bigint }[] = [];
+    for (let k = 0; k < 8; k++) {
+      const planted = randomPoints(rand, 7, 3);
+      const f = randomMember(rand, curvesThroughPoints(3, planted).basis, 1);
+      if (f.coeffs.every((c) => c === 0n) || !cubicSingularPoints(f).smooth) continue;
+      const model = weierstrassModel(f, planted[0]);
+      const ours = cubicRationalPoints(f, { height: H }).points;
+      for (const p of planted) if (pointHeight(p) <= H) expect(ours.map(key)).toContain(key(p));
+      // PARI's bound: the largest naive height of the x-coordinate of our images.
+      let h = 1n;
+      for (const p of ours) {
+        const im = weierstrassMap(model, p);
+        if (im === 'infinity') continue;
+        for (const v of [im.x.num < 0n ? -im.x.num : im.x.num, im.x.den]) if (v > h) h = v;
+      }
+      if (h <= 1_000_000n) cases.push({ f, model, ours, h });
+    }
+    expect(cases.length).toBeGreaterThanOrEqual(4);
+    const lines = gp(cases.map((c) => `print(ellratpoints(ellinit([${c.model.a.join(',')}]), ${c.h}));`).join('\n'));
+    cases.forEach((c, i) => {
+      const ctx = `seed ${seed}, curve ${c.f.coeffs.join(',')}, model [${c.model.a.join(',')}], h ${c.h}`;
+      const pari: ModelPoint[] = ['infinity'];
+      for (const hit of lines[i].matchAll(/\[([^\[\]]+)\]/g)) {
+        const [x, y] = gpVector(`[${hit[1]}]`);
+        pari.push({ x: ratParse(x), y: ratParse(y) });
+      }
+      const pariKeys = new Set(pari.map((q) => (q === 'infinity' ? 'infinity' : `${ratToString(q.x)},${ratToString(q.y)}`)));
+      for (const p of c.ours) {
+        const im = weierstrassMap(c.model, p);
+        expect(pariKeys.has(im === 'infinity' ? 'infinity' : `${ratToString(im.x)},${ratToString(im.y)}`), `${ctx}: image of ${key(p)}`).toBe(true);
+      }
+      const back = new Set(pari.map((q) => weierstrassInverse(c.model, q)).filter((p) => pointHeight(p) <= H).map(key));
+      expect(new Set(c.ours.map(key)), ctx).toEqual(back);
+    });
+  });
+});
