@@ -96,6 +96,32 @@ describe('curveCurveMeet', () => {
   });
 });
 
+describe('curveCurveMeet beyond cubics (degrees up to 6)', () => {
+  it('four lines against five lines: twenty simple rational points', () => {
+    const m = curveCurveMeet(curve('x (x - 1)(x + 1)(x - 2) = 0'), curve('y (y - 1)(y + 2)(y - 3)(y + 4) = 0'));
+    expect([m.total, m.points.length, m.points.every((p) => p.point && p.multiplicity === 1)]).toEqual([20, 20, true]);
+  });
+  it('a sextic and the unit circle: 2 and 3 at the axes, the circular points once each (hand computation: x^2 y^3 = 0 on the circle)', () => {
+    const m = curveCurveMeet(curve('(x^2 + y^2 - 1)^3 = x^2 y^3'), curve('x^2 + y^2 = 1'));
+    expect(pts(m)).toEqual(['0:1:-1x2', '0:1:1x2', '1:0:-1x3', '1:0:1x3']);
+    const circular = m.points.filter((p) => !p.real);
+    expect(circular).toHaveLength(2);
+    for (const p of circular) {
+      // (1 : ±i : 0): z = 0 and |y| = |x|
+      expect(Math.hypot(p.approx[2], p.approxImag![2])).toBeLessThan(1e-9);
+      expect(Math.hypot(p.approx[1], p.approxImag![1])).toBeCloseTo(Math.hypot(p.approx[0], p.approxImag![0]), 9);
+    }
+  });
+  it('a sextic and a quartic: 24 points counted', () => {
+    const m = curveCurveMeet(curve('x^6 + y^6 - 3x^2y^3 + xy - 7 = 0'), curve('x^4 - y^4 + 2xy^2 - x + 5 = 0'));
+    expect(m.total).toBe(24);
+  });
+  it('degree 7 is refused with a message', () => {
+    const septic = formFromCoeffs(7, [1n, ...new Array<bigint>(35).fill(0n)]);
+    expect(() => curveCurveMeet(septic, curve('x + y = 1'))).toThrow(/degree 1 to 6/);
+  });
+});
+
 const smallForm = (d: number) => fc.array(fc.bigInt(-4n, 4n), { minLength: ((d + 1) * (d + 2)) / 2, maxLength: ((d + 1) * (d + 2)) / 2 });
 
 describe('Bézout counts (property, fast-check seed 66)', () => {
