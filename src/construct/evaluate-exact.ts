@@ -6,6 +6,7 @@ import { Degenerate, InvalidInput, NotOnCurve } from '../exact/errors.ts';
 import { conicThroughFive } from '../plane/conic.ts';
 import { curvesThroughPoints } from '../plane/linear-system.ts';
 import { ninthPoint } from '../cubic/nine.ts';
+import { cubicParametrisation, parametrisationAt, type CubicParametrisation } from '../cubic/parametrise.ts';
 import { formAdd, formEval, formGradientAt, formPrimitive, formScale, type Form } from '../poly/form.ts';
 import { formParse } from '../poly/parse.ts';
 import { cross, lineLineMeet, pointPointJoin, triple, tripleIsZero, type Point } from '../plane/point.ts';
@@ -61,6 +62,23 @@ function memberParse(text: string, where = 'member', what = 'a pencil member'): 
   return [BigInt(m[1]), BigInt(m[2])];
 }
 
+const PARAMETRISATIONS = new WeakMap<Form, CubicParametrisation>();
+
+/** The parametrisation through the singular point, made once per curve form. */
+export function parametrisationOf(f: Form, label = 'the curve'): CubicParametrisation {
+  let p = PARAMETRISATIONS.get(f);
+  if (!p) {
+    try {
+      p = cubicParametrisation(f);
+    } catch (e) {
+      if (e instanceof InvalidInput) throw new InvalidInput(`${label} has no parametrisation through a singular point: ${e.message}`, e.where);
+      throw e;
+    }
+    PARAMETRISATIONS.set(f, p);
+  }
+  return p;
+}
+
 type Exact = (input: EvalInput) => ObjectValue;
 
 const EXACT: Partial<Record<string, Exact>> = {
@@ -88,6 +106,11 @@ const EXACT: Partial<Record<string, Exact>> = {
     const n = ninthPoint(parents.map(pointOf));
     if (!n.point) throw new Degenerate(n.reason, 'parents');
     return exactPoint(n.point);
+  },
+  'point-parameter': ({ parents, params, labels }) => {
+    const [s, t] = memberParse(params.at, 'at', 'a parameter value');
+    const par = parametrisationOf(curveOf(parents[0]), labels[0]);
+    return exactPoint(parametrisationAt(par, s, t));
   },
   'point-free': ({ params }) => exactPoint(pointParse(params.at, 'at')),
   'line-equation': ({ params }) => exactLine(pointParse(params.at, 'at')),

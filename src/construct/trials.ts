@@ -30,7 +30,8 @@ export interface TrialOptions {
   readonly seed?: number;
   /** Largest numerator and denominator of a random coordinate (default 12 and 6). */
   readonly height?: number;
-  readonly onProgress?: (done: number, total: number) => void;
+  /** After each instance: how many are done, and the tallies so far (a copy the caller may keep). */
+  readonly onProgress?: (done: number, total: number, checks: readonly TrialCheckReport[]) => void;
   readonly isCancelled?: () => boolean;
 }
 
@@ -111,7 +112,7 @@ export function constructionTrials(doc: ConstructionDoc, opts: TrialOptions = {}
       } else tally.undecided++;
     });
     completed = t;
-    opts.onProgress?.(t, count);
+    opts.onProgress?.(t, count, tallies.map((x) => ({ ...x })));
   }
   return { seed, requested: count, completed, cancelled, redrawn, checks: tallies };
 }

@@ -1,2 +1,70 @@
-// The page's single wiring point (core, stores, renderer, components). Filled in by the canvas work.
-document.body.textContent = 'Ninefold is starting.';
+// The page's single wiring point: restore the open construction, keep it saved, mount the app, and expose
+// a small hook for the browser tests (window.__ninefold).
+import { constructionEmpty, constructionObject } from '../construct/graph.ts';
+import type { ObjectValue } from '../construct/types.ts';
+import { $doc, $history, $values, docReset } from './stores/construction.ts';
+import { $selection, $tool, $view, noticeShow, worldToScreen } from './stores/interaction.ts';
+import { $search } from './stores/search.ts';
+import { persistRestore, persistSave } from './persist.ts';
+import { NinefoldError } from '../exact/errors.ts';
+import { frameLog } from './components/nf-canvas.ts';
+import './components/nf-app.ts';
+import './scene-file/wire.ts'; // E8 wiring: scene panel (file, figure, trials) in the side bar; default demo scene when nothing was restored
+
+function start(): void {
+  document.body.style.margin = '0';
+  const width = Math.max(200, window.innerWidth - 550);
+  const height = Math.max(200, window.innerHeight - 44);
+  $view.set({ ...$view.get(), width, height });
+  try {
+    const restored = persistRestore(window.localStorage, width, height);
+    docReset(restored ? restored.doc : constructionEmpty());
+    if (restored) {
+      $view.set({ ...$view.get(), ...restored.view });
+      noticeShow('info', `Restored the open construction (${restored.doc.objects.length} objects).`, 'canvas');
+    }
+  } catch (e) {
+    docReset(constructionEmpty());
+    if (e instanceof NinefoldError) noticeShow('error', `The stored construction could not be restored (${e.message}${e.where ? `, at ${e.where}` : ''}); it is kept aside in the browser's storage.`, 'canvas');
+    else throw e;
+  }
+  let timer = 0;
+  const save = (): void => {
+    clearTimeout(timer);
+    timer = window.setTimeout(() => persistSave(window.localStorage, $doc.get(), $view.get()), 150);
+  };
+  $history.listen(save);
+  $view.listen(save);
+  document.body.appendChild(document.createElement('nf-app'));
+  installTestHook();
+}
+
+function installTestHook(): void {
+  const canvasRect = (): DOMRect | null => {
+    const app = document.querySelector('nf-app');
+    const c = app?.shadowRoot?.querySelector('nf-canvas');
+    return c ? c.getBoundingClientRect() : null;
+  };
+  const json = (v: unknown): unknown => JSON.parse(JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? x.toString() : x)));
+  (window as unknown as Record<string, unknown>).__ninefold = {
+    doc: () => json($doc.get()),
+    value: (id: string): unknown => json($values.get().get(id) as ObjectValue | undefined),
+    idOf: (label: string): string | null => $doc.get().objects.find((o) => o.label === label)?.id ?? null,
+    labelOf: (id: string): string | null => constructionObject($doc.get(), id)?.label ?? null,
+    /** Page coordinates of a world point. */
+    worldToPage: (x: number, y: number): [number, number] | null => {
+      const r = canvasRect();
+      if (!r) return null;
+      const [sx, sy] = worldToScreen($view.get(), x, y);
+      return [r.left + sx, r.top + sy];
+    },
+    view: () => $view.get(),
+    setView: (cx: number, cy: number, scale: number) => $view.set({ ...$view.get(), cx, cy, scale }),
+    selection: () => $selection.get(),
+    tool: () => $tool.get(),
+    search: () => json($search.get()),
+    frames: () => frameLog.slice(),
+  };
+}
+
+start();

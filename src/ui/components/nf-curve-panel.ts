@@ -1,0 +1,128 @@
+// The curve panel: type an equation (errors marked at their column), build a curve from points, choose
+// the active curve, and read its report (smooth or not, singular points, components, invariants, flexes).
+import { LitElement, css, html, nothing } from 'lit';
+import { customElement, state } from 'lit/decorators.js';
+import { StoreController } from '@nanostores/lit';
+import { NinefoldError, ParseError } from '../../exact/errors.ts';
+import { formParse } from '../../poly/parse.ts';
+import { formToText } from '../../poly/print.ts';
+import { constructionAdd, constructionObject } from '../../construct/graph.ts';
+import type { ConstructionKind, CurveValue } from '../../construct/types.ts';
+import { $doc, $values, docCommit } from '../stores/construction.ts';
+import { $selection, noticeShow } from '../stores/interaction.ts';
+import { curveReportText, type ReportLine } from '../report.ts';
+import { theme } from './theme.ts';
+
+@customElement('nf-curve-panel')
+export class NfCurvePanel extends LitElement {
+  static override styles = [
+    theme,
+    css`
+      :host { display: block; }
+      form { display: flex; gap: 6px; }
+      input.eq { flex: 1; min-width: 0; font-family: 'DejaVu Sans Mono', monospace; }
+      input.eq[aria-invalid='true'] { border-color: var(--fails); background: #fff4f1; }
+      .error { color: var(--fails); margin: 4px 0 0; }
+      .caret { font-family: 'DejaVu Sans Mono', monospace; white-space: pre; color: var(--fails); margin: 0; font-size: 12px; }
+      .build { display: flex; flex-wrap: wrap; gap: 4px; margin: 6px 0; }
+      .curves { display: flex; flex-wrap: wrap; gap: 4px; margin: 6px 0; }
+      .curves button[aria-pressed='true'] { border-color: var(--accent); background: var(--accent-soft); font-weight: 600; }
+      dl { display: grid; grid-template-columns: max-content 1fr; gap: 3px 10px; margin: 6px 0 0; }
+      dt { color: var(--ink-soft); }
+      dd { margin: 0; min-width: 0; overflow-wrap: anywhere; }
+      .swatch { display: inline-block; width: 10px; height: 10px; border-radius: 2px; margin-right: 4px; vertical-align: -1px; }
+    `,
+  ];
+
+  private readonly doc = new StoreController(this, $doc);
+  private readonly values = new StoreController(this, $values);
+  @state() private error: { message: string; column: number; text: string } | null = null;
+
+  protected override render(): unknown {
+    const doc = this.doc.value;
+    const curves = doc.objects.filter((o) => o.type === 'curve');
+    const active = doc.activeCurve ? constructionObject(doc, doc.activeCurve) : undefined;
+    const value = active ? this.values.value.get(active.id) : undefined;
+    return html`
+      <form @submit=${this.submit} aria-label="New curve from an equation">
+        <input
+          class="eq"
+          name="equation"
+          aria-label="Equation of a curve, e.g. y^2 + xy = x^3 - 5x + 7"
+          placeholder="y^2 + xy = x^3 - 5x + 7"
+          aria-invalid=${this.error ? 'true' : 'false'}
+          aria-describedby="eq-error"
+          @keydown=${(e: KeyboardEvent) => e.stopPropagation()}
+          @input=${() => (this.error = null)}
+        />
+        <button type="submit">Add curve</button>
+      </form>
+      ${this.error
+        ? html`<p class="caret" aria-hidden="true">${' '.repeat(Math.max(0, this.error.column - 1))}^</p>
+            <p class="error" id="eq-error" role="alert">At column ${this.error.column}: ${this.error.message}</p>`
+        : nothing}
+      <div class="build" aria-label="Curves from the selected points">
+        <button @click=${() => this.fromPoints('conic-through-five', 5)} title="Select five points first">Conic through 5</button>
+        <button @click=${() => this.fromPoints('cubic-through-nine', 9)} title="Select nine points first">Cubic through 9</button>
+        <button @click=${() => this.fromPoints('pencil-member', 8)} title="Select eight points first">Pencil member through 8</button>
+      </div>
+      ${curves.length > 1
+        ? html`<div class="curves" role="group" aria-label="Active curve">
+            ${curves.map(
+              (c) => html`<button aria-pressed=${c.id === doc.activeCurve ? 'true' : 'false'} @click=${() => docCommit({ ...doc, activeCurve: c.id })}>
+                <span class="swatch" style="background:${c.style.colour}"></span>${c.label}
+              </button>`,
+            )}
+          </div>`
+        : nothing}
+      ${active && value ? this.report(active.label, value) : html`<p class="soft">No curve yet: type an equation above.</p>`}
+    `;
+  }
+
+  private report(label: string, value: unknown): unknown {
+    const v = value as CurveValue | { type: 'failure'; message: string };
+    if (v.type === 'failure') return html`<p class="error">${label} cannot be built now: ${v.message}</p>`;
+    const lines: ReportLine[] = curveReportText(v);
+    return html`<dl aria-label="Report on ${label}">
+      <dt>Curve</dt><dd><strong>${label}</strong> <span class="status-${v.status}">${v.status}</span></dd>
+      ${lines.map((l) => html`<dt>${l.term}</dt><dd class=${l.mono ? 'mono' : ''}>${l.text}</dd>`)}
+    </dl>`;
+  }
+
+  private submit(e: Event): void {
+    e.preventDefault();
+    const input = (e.currentTarget as HTMLFormElement).elements.namedItem('equation') as HTMLInputElement;
+    const text = input.value;
+    try {
+      const parsed = formParse(text, 'equation');
+      const r = constructionAdd(this.doc.value, { construction: { kind: 'curve-equation', parents: [], params: { equation: text } } });
+      docCommit({ ...r.doc, activeCurve: r.id });
+      this.error = null;
+      input.value = '';
+      noticeShow('done', `${constructionObject(r.doc, r.id)?.label}: ${formToText(parsed.form, { affine: true })} = 0 added and made active.`, 'equation');
+    } catch (err) {
+      if (err instanceof ParseError) this.error = { message: err.message, column: err.column, text };
+      else if (err instanceof NinefoldError) this.error = { message: err.message, column: 1, text };
+      else throw err;
+    }
+  }
+
+  private fromPoints(kind: ConstructionKind, n: number): void {
+    const doc = this.doc.value;
+    const sel = $selection.get().filter((id) => constructionObject(doc, id)?.type === 'point');
+    if (sel.length !== n) {
+      noticeShow('error', `Select exactly ${n} points first (shift-click on the canvas); ${sel.length} selected.`, 'equation');
+      return;
+    }
+    try {
+      const r = constructionAdd(doc, { construction: { kind, parents: sel, params: kind === 'pencil-member' ? { member: '1:0' } : {} } });
+      docCommit({ ...r.doc, activeCurve: r.id });
+      const v = $values.get().get(r.id);
+      if (v?.type === 'failure') noticeShow('error', v.message, 'equation');
+      else noticeShow('done', `${constructionObject(r.doc, r.id)?.label} built from ${n} points.`, 'equation');
+    } catch (err) {
+      if (err instanceof NinefoldError) noticeShow('error', err.message, 'equation');
+      else throw err;
+    }
+  }
+}

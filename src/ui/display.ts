@@ -1,0 +1,222 @@
+// The construction as a display list (shaders-free-render/display-list.ts) for the current view: curves
+// traced by the CPU tracer, lines clipped to the view, points with their status shape, labels, and the
+// highlights of selection, hover and picks. The same list could feed an exporter; here it feeds the sink.
+//
+// Status shapes (readable in greyscale; the same code as the figure exporter): exact = filled disc,
+// algebraic = ring, approximate = dashed ring. Selection = a wide pale halo, hover = a thin dark halo.
+import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
+import { curvePrepare, curveTrace, type PreparedCurve } from '../../shaders-free-render/trace.ts';
+import type { ConstructionDoc, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
+import type { BlowupView, View } from './stores/interaction.ts';
+
+export interface DisplayExtras {
+  readonly selection: ReadonlySet<ObjectId>;
+  readonly hover: ObjectId | null;
+  readonly picks: readonly ObjectId[];
+  /** Points found by the search, drawn small (not objects of the construction). */
+  readonly found?: readonly PointApprox[];
+  readonly blowup?: BlowupView | null;
+  /** The search region being drawn or in force, in world coordinates. */
+  readonly region?: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number } | null;
+}
+
+export const PAPER = '#fbf8f1';
+const HALO_SELECT = '#f2c14e';
+const HALO_HOVER = '#2b2b2b';
+
+function style(stroke: string, width: number, fill: string, radius: number, dash: readonly number[] = [], fontSize = 13): ItemStyle {
+  return { stroke, width, fill, radius, dash, fontSize };
+}
+
+const PREPARED = new WeakMap<readonly number[], PreparedCurve | null>();
+
+function prepared(coeffs: readonly number[]): PreparedCurve | null {
+  if (PREPARED.has(coeffs)) return PREPARED.get(coeffs)!;
+  const degree = Math.round((Math.sqrt(8 * coeffs.length + 1) - 3) / 2);
+  let p: PreparedCurve | null = null;
+  try {
+    p = curvePrepare({ degree, coeffs });
+  } catch {
+    p = null; // a curve the tracer refuses is left undrawn; its report says why
+  }
+  PREPARED.set(coeffs, p);
+  return p;
+}
+
+export function viewBounds(v: View): { xmin: number; xmax: number; ymin: number; ymax: number } {
+  const hw = v.width / 2 / v.scale;
+  const hh = v.height / 2 / v.scale;
+  return { xmin: v.cx - hw, xmax: v.cx + hw, ymin: v.cy - hh, ymax: v.cy + hh };
+}
+
+/** The part of the line ax + by + c = 0 inside the box, or null. */
+export function lineClip(l: readonly number[], b: { xmin: number; xmax: number; ymin: number; ymax: number }): [number, number, number, number] | null {
+  const [a, bb, c] = l;
+  const pts: [number, number][] = [];
+  if (Math.abs(bb) > 1e-300) {
+    for (const x of [b.xmin, b.xmax]) {
+      const y = -(a * x + c) / bb;
+      if (y >= b.ymin - 1e-12 && y <= b.ymax + 1e-12) pts.push([x, y]);
+    }
+  }
+  if (Math.abs(a) > 1e-300) {
+    for (const y of [b.ymin, b.ymax]) {
+      const x = -(bb * y + c) / a;
+      if (x >= b.xmin - 1e-12 && x <= b.xmax + 1e-12) pts.push([x, y]);
+    }
+  }
+  if (pts.length < 2) return null;
+  pts.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+  const p = pts[0];
+  const q = pts[pts.length - 1];
+  return [p[0], p[1], q[0], q[1]];
+}
+
+export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId, ObjectValue>, view: View, extras: DisplayExtras): DisplayList {
+  const items: DisplayItem[] = [];
+  const styles: Record<string, ItemStyle> = {};
+  const box = viewBounds(view);
+  const px = 1 / view.scale;
+  const traceView = { ...box, width: view.width, height: view.height };
+  const picked = new Set(extras.picks);
+  const lineOnTop: DisplayItem[] = [];
+  const pointItems: DisplayItem[] = [];
+  const labelItems: DisplayItem[] = [];
+
+  axes(items, styles, box, view);
+  if (extras.region) {
+    const r = extras.region;
+    styles.region = style('#7a6a9c', 1, '#7a6a9c', 0, [6, 4]);
+    const [x0, x1] = [Math.min(r.x0, r.x1), Math.max(r.x0, r.x1)];
+    const [y0, y1] = [Math.min(r.y0, r.y1), Math.max(r.y0, r.y1)];
+    items.push({ kind: 'polyline', points: [x0, y0, x1, y0, x1, y1, x0, y1, x0, y0], closed: true, ends: null, style: 'region' });
+  }
+
+  for (const o of doc.objects) {
+    const v = values.get(o.id);
+    if (!v || v.type === 'failure' || !o.style.visible) continue;
+    const highlighted = extras.selection.has(o.id) || picked.has(o.id);
+    const hovered = extras.hover === o.id;
+    if (v.type === 'curve') {
+      const p = prepared(v.approx);
+      if (!p) continue;
+      let trace;
+      try {
+        trace = curveTrace(p, traceView);
+      } catch {
+        continue;
+      }
+      const width = (o.style.width ?? 2) + (highlighted ? 1.5 : 0) + (hovered ? 1 : 0);
+      const dash = v.status === 'exact' ? dashOf(o.style.stroke) : [7, 5];
+      const key = `curve:${o.id}`;
+      styles[key] = style(o.style.colour, width, o.style.colour, 2.5, dash);
+      if (highlighted) styles[`${key}:halo`] = style(HALO_SELECT, width + 5, HALO_SELECT, 4);
+      for (const pl of trace.polylines) {
+        if (highlighted) items.push({ kind: 'polyline', points: pl.points, closed: pl.closed, ends: pl.ends, style: `${key}:halo`, owner: o.id });
+        items.push({ kind: 'polyline', points: pl.points, closed: pl.closed, ends: pl.ends, style: key, owner: o.id });
+      }
+      for (const [x, y] of trace.dots) items.push({ kind: 'dot', x, y, role: 'isolated', style: key, owner: o.id });
+      if (o.style.showLabel && trace.polylines.length) {
+        const pl = trace.polylines[0].points;
+        const k = 2 * Math.floor(pl.length / 4);
+        labelItems.push({ kind: 'label', x: pl[k] + 6 * px, y: pl[k + 1] + 6 * px, text: o.label, style: labelStyle(styles, o.style.colour) });
+      }
+    } else if (v.type === 'line') {
+      const seg = lineClip(v.approx, box);
+      if (!seg) continue;
+      const width = (o.style.width ?? 1.25) + (highlighted ? 1.5 : 0) + (hovered ? 1 : 0);
+      const dash = v.status === 'exact' ? dashOf(o.style.stroke) : v.status === 'algebraic' ? [2, 3] : [7, 5];
+      const key = `line:${o.id}`;
+      styles[key] = style(o.style.colour, width, o.style.colour, 0, dash);
+      if (highlighted) {
+        styles[`${key}:halo`] = style(HALO_SELECT, width + 5, HALO_SELECT, 0);
+        lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: `${key}:halo`, owner: o.id });
+      }
+      lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: key, owner: o.id });
+      if (o.style.showLabel) {
+        labelItems.push({ kind: 'label', x: 0.8 * seg[2] + 0.2 * seg[0] + 5 * px, y: 0.8 * seg[3] + 0.2 * seg[1] + 5 * px, text: o.label, style: labelStyle(styles, o.style.colour) });
+      }
+    } else if (v.type === 'point') {
+      const a = v.approx;
+      if (!a.finite || a.x < box.xmin - 1 || a.x > box.xmax + 1 || a.y < box.ymin - 1 || a.y > box.ymax + 1) continue;
+      const helper = o.helperOf !== undefined;
+      const r = helper ? 3 : 4.5;
+      if (highlighted) {
+        styles['halo:select'] = style(HALO_SELECT, 0, HALO_SELECT, 10);
+        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'halo:select', owner: o.id });
+      }
+      if (hovered) {
+        styles['halo:hover'] = style(HALO_HOVER, 1.5, 'none', r + 4);
+        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'halo:hover', owner: o.id });
+      }
+      const key = `point:${v.status}:${o.style.colour}:${r}`;
+      styles[key] =
+        v.status === 'exact'
+          ? style(PAPER, 1.25, o.style.colour, r)
+          : v.status === 'algebraic'
+            ? style(o.style.colour, 2, 'none', r)
+            : style(o.style.colour, 1.75, 'none', r + 0.5, [2.5, 2]);
+      pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
+      if (o.style.showLabel) labelItems.push({ kind: 'label', x: a.x + 7 * px, y: a.y + 7 * px, text: o.label, style: labelStyle(styles, '#1e1c18') });
+    }
+  }
+  if (extras.blowup) {
+    const b = extras.blowup;
+    styles['blowup:tangent'] = style('#0f6b5c', 1.5, '#0f6b5c', 0, [9, 4]);
+    styles['blowup:line'] = style('#0f6b5c', 1.5, '#0f6b5c', 0);
+    styles['blowup:point'] = style('#0f6b5c', 2.5, 'none', 7);
+    styles['blowup:singular'] = style('#0f6b5c', 2, 'none', 10, [3, 2]);
+    for (const t of b.tangents) {
+      const seg = lineClip(t, box);
+      if (seg) lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: 'blowup:tangent' });
+    }
+    if (b.singular.finite) {
+      pointItems.push({ kind: 'dot', x: b.singular.x, y: b.singular.y, role: 'point', style: 'blowup:singular' });
+      if (b.point?.finite) {
+        const l = [b.singular.y - b.point.y, b.point.x - b.singular.x, b.singular.x * b.point.y - b.point.x * b.singular.y];
+        const seg = lineClip(l, box);
+        if (seg) lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: 'blowup:line' });
+      }
+    }
+    if (b.point?.finite) pointItems.push({ kind: 'dot', x: b.point.x, y: b.point.y, role: 'point', style: 'blowup:point' });
+  }
+  if (extras.found?.length) {
+    styles.found = style('#5d4a8a', 1, '#5d4a8a', 2.5);
+    for (const p of extras.found) if (p.finite) pointItems.push({ kind: 'dot', x: p.x, y: p.y, role: 'point', style: 'found' });
+  }
+  return { items: [...items, ...lineOnTop, ...pointItems, ...labelItems], styles };
+}
+
+/** Faint axes with a tick at each unit step that leaves at least 40 pixels between ticks. */
+function axes(items: DisplayItem[], styles: Record<string, ItemStyle>, box: ReturnType<typeof viewBounds>, view: View): void {
+  styles.axis = style('#cfc6b0', 1, '#cfc6b0', 0);
+  styles['axis:label'] = style('#8f8672', 0, '#8f8672', 0, [], 11);
+  const step = 10 ** Math.ceil(Math.log10(40 / view.scale));
+  const tick = 4 / view.scale;
+  if (box.ymin <= 0 && box.ymax >= 0) {
+    items.push({ kind: 'segment', x0: box.xmin, y0: 0, x1: box.xmax, y1: 0, style: 'axis' });
+    for (let x = Math.ceil(box.xmin / step) * step; x <= box.xmax; x += step) {
+      if (Math.abs(x) < step / 2) continue;
+      items.push({ kind: 'segment', x0: x, y0: -tick, x1: x, y1: tick, style: 'axis' });
+      items.push({ kind: 'label', x: x + 2 / view.scale, y: -17 / view.scale, text: String(Number(x.toPrecision(6))), style: 'axis:label' });
+    }
+  }
+  if (box.xmin <= 0 && box.xmax >= 0) {
+    items.push({ kind: 'segment', x0: 0, y0: box.ymin, x1: 0, y1: box.ymax, style: 'axis' });
+    for (let y = Math.ceil(box.ymin / step) * step; y <= box.ymax; y += step) {
+      if (Math.abs(y) < step / 2) continue;
+      items.push({ kind: 'segment', x0: -tick, y0: y, x1: tick, y1: y, style: 'axis' });
+      items.push({ kind: 'label', x: 5 / view.scale, y: y - 6 / view.scale, text: String(Number(y.toPrecision(6))), style: 'axis:label' });
+    }
+  }
+}
+
+function dashOf(stroke: string | undefined): number[] {
+  return stroke === 'dashed' ? [8, 5] : stroke === 'dotted' ? [2, 4] : [];
+}
+
+function labelStyle(styles: Record<string, ItemStyle>, colour: string): string {
+  const key = `label:${colour}`;
+  styles[key] = style(colour, 0, colour, 0, [], 14);
+  return key;
+}

@@ -1,0 +1,35 @@
+// Running one job: the same code inside the worker and in Node tests. Pure apart from the `post` callback.
+import { NinefoldError } from '../exact/errors.ts';
+import { ratParse } from '../exact/rational.ts';
+import { formFromCoeffs, monomialCount } from '../poly/form.ts';
+import { pointToString } from '../plane/parse-point.ts';
+import { cubicRationalPoints } from '../cubic/search.ts';
+import type { JobReply, JobRequest } from './jobs.ts';
+
+export function jobRun(req: JobRequest, post: (reply: JobReply) => void): void {
+  try {
+    const n = req.coeffs.length;
+    const degree = [1, 2, 3, 4, 5, 6].find((d) => monomialCount(d) === n);
+    if (degree === undefined) throw new NinefoldError(`a curve with ${n} coefficients has no degree`, 'curve');
+    const f = formFromCoeffs(degree, req.coeffs.map((c) => BigInt(c)));
+    const region = req.box
+      ? { kind: 'box' as const, xmin: ratParse(req.box.xmin), xmax: ratParse(req.box.xmax), ymin: ratParse(req.box.ymin), ymax: ratParse(req.box.ymax) }
+      : undefined;
+    let last = 0;
+    const r = cubicRationalPoints(f, {
+      height: req.height,
+      ...(region ? { region } : {}),
+      onProgress: (done, total) => {
+        // At most about a hundred progress messages per job.
+        if (done === total || done - last >= total / 100) {
+          last = done;
+          post({ kind: 'progress', job: req.job, done, total });
+        }
+      },
+    });
+    post({ kind: 'found', job: req.job, points: r.points.map(pointToString), note: r.note, complete: r.complete });
+  } catch (e) {
+    if (e instanceof NinefoldError) post({ kind: 'error', job: req.job, message: e.message, where: e.where });
+    else post({ kind: 'error', job: req.job, message: `the search stopped: ${(e as Error).message}`, where: 'search' });
+  }
+}

@@ -1,0 +1,21 @@
+// The messages between the page and the job worker. Plain data only (structured clone): bigints travel
+// as strings, points as "X:Y:Z".
+//
+// Cancellation is by ending the worker (the page then starts a fresh one): the search is synchronous
+// inside the worker, so a message could not interrupt it, and ending it frees the thread at once.
+export interface SearchRequest {
+  readonly kind: 'search';
+  readonly job: number;
+  /** The curve's coefficients as decimal strings, in the order of src/poly/form.ts. */
+  readonly coeffs: readonly string[];
+  readonly height: number;
+  /** Affine box as rationals "-17/4", or null for the whole plane. */
+  readonly box: { readonly xmin: string; readonly xmax: string; readonly ymin: string; readonly ymax: string } | null;
+}
+
+export type JobRequest = SearchRequest;
+
+export type JobReply =
+  | { readonly kind: 'progress'; readonly job: number; readonly done: number; readonly total: number }
+  | { readonly kind: 'found'; readonly job: number; readonly points: readonly string[]; readonly note: string; readonly complete: boolean }
+  | { readonly kind: 'error'; readonly job: number; readonly message: string; readonly where: string };
