@@ -23,7 +23,7 @@ import { tripleIsZero, type Point } from '../plane/point.ts';
 import { formGradientAt } from '../poly/form.ts';
 import { cubicThirdPoint } from './chord.ts';
 import { pointHeight, pointHeightCompare } from './height.ts';
-import { cubicParametrisation, parametrisationAt } from './parametrise.ts';
+import { cubicParametrisation, parametrisationAt, type CubicParametrisation } from './parametrise.ts';
 import { cubicSingularPoints } from './singular.ts';
 import { regionContains, sievePoints, type SearchRegion, type SieveOptions } from './search-sieve.ts';
 
@@ -38,6 +38,12 @@ export interface PointSearchOptions extends SieveOptions {
   readonly known?: readonly Point[];
   /** At most this many points are kept by the closure before it stops (default 5000). */
   readonly closureLimit?: number;
+  /**
+   * For singular irreducible cubics, both routes are complete: 'auto' (default) takes the cheaper by the
+   * count of candidates (B² parameters against about 4·H² sieve pairs, each pair costing about two
+   * parameter evaluations as measured), or the parametrisation when H exceeds sieveLimit.
+   */
+  readonly method?: 'auto' | 'sieve' | 'parametrisation';
 }
 
 export type PointSearchMethod = 'parametrisation' | 'sieve' | 'sieve and closure';
@@ -75,11 +81,17 @@ export function cubicRationalPoints(f0: Form, options: PointSearchOptions): Poin
   const sing = cubicSingularPoints(f);
   const irreducible = sing.components.shape === 'irreducible';
   if (irreducible && !sing.smooth) {
-    const points = parametrisedPoints(f, h, options);
-    return {
-      points, complete: true, completeUpTo: h, method: 'parametrisation',
-      note: `all ${points.length} points of height <= ${h}${region ? ' in the region' : ''}: the singular cubic is enumerated through its rational parametrisation, whose inverse bounds the parameters needed`,
-    };
+    const par = cubicParametrisation(f);
+    const bound = parameterBound(par, h);
+    const method = options.method ?? 'auto';
+    const useParametrisation = method === 'parametrisation' || (method === 'auto' && (h > limit || bound * bound <= 4n * h * h));
+    if (useParametrisation) {
+      const points = parametrisedPoints(par, bound, h, options);
+      return {
+        points, complete: true, completeUpTo: h, method: 'parametrisation',
+        note: `all ${points.length} points of height <= ${h}${region ? ' in the region' : ''}: the singular cubic is enumerated through its rational parametrisation, all parameters of height <= ${bound} (the bound its inverse gives)`,
+      };
+    }
   }
   if (h <= limit) {
     const points = uniqueSorted(sievePoints(f, h, options));
@@ -93,7 +105,7 @@ export function cubicRationalPoints(f0: Form, options: PointSearchOptions): Poin
     const points = uniqueSorted(base.filter((p) => regionContains(region, p)));
     return {
       points, complete: false, completeUpTo: limit, method: 'sieve',
-      note: `the cubic is not irreducible (${sing.components.description}); searched completely up to height ${limit} only (raise sieveLimit to go further)`,
+      note: `${irreducible ? 'the sieve was asked for' : `the cubic is not irreducible (${sing.components.description})`}; searched completely up to height ${limit} only (raise sieveLimit to go further)`,
     };
   }
   const closed = chordClosure(f, [...base, ...(options.known ?? [])], h, options);
@@ -104,13 +116,17 @@ export function cubicRationalPoints(f0: Form, options: PointSearchOptions): Poin
   };
 }
 
-// Assumes f primitive, irreducible, with one (rational) singular point.
-function parametrisedPoints(f: Form, h: bigint, options: PointSearchOptions): Point[] {
-  const par = cubicParametrisation(f);
+/** B = max(|ℓ0|₁, |ℓ1|₁)·H: every point of height <= H other than P has a primitive parameter of height <= B. */
+function parameterBound(par: CubicParametrisation, h: bigint): bigint {
   const norm = (l: readonly bigint[]) => bigAbs(l[0]) + bigAbs(l[1]) + bigAbs(l[2]);
   const a = norm(par.inverse[0]);
   const b = norm(par.inverse[1]);
-  const bound = (a > b ? a : b) * h;
+  return (a > b ? a : b) * h;
+}
+
+// Assumes par is the parametrisation of the curve and bound = parameterBound(par, h).
+function parametrisedPoints(par: CubicParametrisation, bound: bigint, h: bigint, options: PointSearchOptions): Point[] {
+  const f = par.curve;
   const out: Point[] = [];
   const keep = (p: Point): void => {
     if (pointHeight(p) <= h && regionContains(options.region, p)) out.push(p);

@@ -25,16 +25,22 @@ describe('cubicRationalPoints', () => {
   it('singular cubics: the parametrisation and the sieve, both complete, agree exactly (node, acnode, cusp)', () => {
     for (const text of ['y^2 = (x - 1)^2 (x + 2)', 'y^2 = (x + 3)^2 (x - 5)', '(y - x)^2 = (x - 2)^3', 'x^3 + 2y^3 = 7xy']) {
       const f = curve(text);
-      const r = cubicRationalPoints(f, { height: 60 });
+      const r = cubicRationalPoints(f, { height: 60, method: 'parametrisation' });
       expect(r.method, text).toBe('parametrisation');
       expect(r.complete).toBe(true);
       const sieve = sievePoints(f, 60n).sort(pointHeightCompare);
       expect(keys(r.points), text).toEqual(keys(sieve));
     }
   });
+  it('singular cubics past the sieve limit go through the parametrisation, still complete', () => {
+    const f = curve('y^2 = (x - 1)^2 (x + 2)');
+    const r = cubicRationalPoints(f, { height: 40, sieveLimit: 10 });
+    expect([r.method, r.complete, r.completeUpTo]).toEqual(['parametrisation', true, 40n]);
+    expect(keys(r.points)).toEqual(keys(sievePoints(f, 40n).sort(pointHeightCompare)));
+  });
   it('positive region: only points with x, y > 0, on both routes', () => {
     const f = curve('x^3 + 2y^3 = 7xy');
-    const r = cubicRationalPoints(f, { height: 80, region: { kind: 'positive' } });
+    const r = cubicRationalPoints(f, { height: 80, region: { kind: 'positive' }, method: 'parametrisation' });
     expect(r.points.length).toBeGreaterThan(0);
     for (const [x, y, z] of r.points) expect(x * z > 0n && y * z > 0n).toBe(true);
     const s = cubicRationalPoints(curve('y^2 = x^3 - 2x + 5'), { height: 50, region: { kind: 'positive' } });
@@ -64,6 +70,6 @@ describe('cubicRationalPoints', () => {
     let calls = 0;
     expect(() => cubicRationalPoints(curve('y^2 = x^3 + 3'), { height: 500, isCancelled: () => ++calls > 3 })).toThrow(Cancelled);
     calls = 0;
-    expect(() => cubicRationalPoints(curve('y^2 = (x - 1)^2 (x + 2)'), { height: 500, isCancelled: () => ++calls > 3 })).toThrow(Cancelled);
+    expect(() => cubicRationalPoints(curve('y^2 = (x - 1)^2 (x + 2)'), { height: 500, method: 'parametrisation', isCancelled: () => ++calls > 3 })).toThrow(Cancelled);
   });
 });
