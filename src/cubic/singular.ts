@@ -2,9 +2,9 @@
 // numbers; and the singular line of a cubic with a repeated component.
 //
 // Canonical form: rational points are primitive triples (src/plane/point.ts); a Galois orbit of points
-// that are not rational is given exactly as the roots (s:t) of an irreducible binary form on a rational
-// line, the points being s·A + t·B (`ConjugatePoints`), or, for three lines conjugate over a cubic field,
-// as the pairwise meets of the factors of F; every point carries an approximation for display.
+// that are not rational is given exactly as polynomial coordinates over the roots θ of an irreducible
+// polynomial (src/cubic/conjugate-points.ts), real members with θ as a real algebraic number; every point
+// carries an approximation for display.
 //
 // Method (MATH.md; Fulton, Algebraic Curves, ch. 3 and 5): factor over Q first (src/cubic/factor.ts);
 // the singular points of a reducible cubic are those of its components and the points where they meet.
@@ -22,7 +22,9 @@ import { isqrt, isSquare } from '../exact/integer.ts';
 import { cross, triple, type Line, type Point } from '../plane/point.ts';
 import { formGradientAt, formPartial, formPrimitive, type Form } from '../poly/form.ts';
 import { formOnLine } from '../poly/substitute.ts';
-import { pencilPointApprox, pointApprox, quadraticRootsApprox, triangleVerticesApprox, type Approx } from './approx.ts';
+import type { RealAlgebraic } from '../exact/algebraic.ts';
+import { pointApprox, type Approx } from './approx.ts';
+import { conjugateMembers, conjugatesOnLine, triangleVertices, type ConjugatePoints } from './conjugate-points.ts';
 import { cubicComponents, lineSpan, linePairIsReal, type CubicComponents } from './factor.ts';
 import { jacobianDual, jacobianSaturationLines } from './jacobian.ts';
 import { lineForm } from './linear-factors.ts';
@@ -30,17 +32,13 @@ import { doublePointShape, formTangentCone, splitNodeTangents, tangentIsOrdinary
 
 export type SingularKind = 'node' | 'cusp' | 'tacnode' | 'triple point';
 
-/** Points s·A + t·B for the roots (s:t) of an irreducible binary form on the rational line AB. */
-export interface ConjugatePoints {
-  readonly on: readonly [Point, Point];
-  readonly binary: readonly bigint[];
-}
-
 export interface SingularPoint {
   /** The point when rational, else null. */
   readonly point: Point | null;
-  /** For a point that is not rational: the exact orbit it belongs to (null for the cubic-field triangle). */
+  /** For a point that is not rational: the exact orbit it belongs to (src/cubic/conjugate-points.ts). */
   readonly conjugates: ConjugatePoints | null;
+  /** For a real point that is not rational: its θ in the orbit, as a real algebraic number. */
+  readonly root: RealAlgebraic | null;
   readonly approx: Approx;
   /** Imaginary parts of the approximation, for a complex point; null for a real one. */
   readonly approxImag: Approx | null;
@@ -76,9 +74,9 @@ export interface CubicSingularities {
 
 const NUMBERS: Record<string, number> = { node: 1, cusp: 2, tacnode: 3, 'triple point': 4 };
 
-function rationalPoint(p: Point, rest: Omit<SingularPoint, 'point' | 'conjugates' | 'approx' | 'approxImag' | 'real' | 'milnor' | 'tjurina'>): SingularPoint {
+function rationalPoint(p: Point, rest: Omit<SingularPoint, 'point' | 'conjugates' | 'root' | 'approx' | 'approxImag' | 'real' | 'milnor' | 'tjurina'>): SingularPoint {
   const n = NUMBERS[rest.kind];
-  return { point: p, conjugates: null, approx: pointApprox(p), approxImag: null, real: true, milnor: n, tjurina: n, ...rest };
+  return { point: p, conjugates: null, root: null, approx: pointApprox(p), approxImag: null, real: true, milnor: n, tjurina: n, ...rest };
 }
 
 /** A rational double point of f classified from its cone (f is known to be reduced at P). */
@@ -97,30 +95,30 @@ function triplePointAt(p: Point, tangents: Form[]): SingularPoint {
   return rationalPoint(p, { multiplicity: 3, kind: 'triple point', ordinary: true, split: null, realKind: null, tangents });
 }
 
-/** The two conjugate points where the rational line l meets a form q (degree 2 on l, irreducible there). */
-function conjugatePair(l: Line, q: Form, tangents: Form[], realPoints: boolean | null): SingularPoint[] {
+/** The nodes of an orbit of conjugate points (each a node with the given tangent forms). */
+function conjugateNodes(orbit: ConjugatePoints, tangents: Form[]): SingularPoint[] {
+  return conjugateMembers(orbit).map((m) => ({
+    point: null,
+    conjugates: orbit,
+    root: m.root,
+    approx: m.approx.re,
+    approxImag: m.real ? null : m.approx.im,
+    real: m.real,
+    multiplicity: 2 as const,
+    kind: 'node' as const,
+    ordinary: true,
+    split: null,
+    realKind: m.real ? ('crunode' as const) : null,
+    tangents,
+    milnor: 1,
+    tjurina: 1,
+  }));
+}
+
+/** The two conjugate points where the rational line l meets a form q (irreducible on l). */
+function conjugatePair(l: Line, q: Form, tangents: Form[]): SingularPoint[] {
   const [a, b] = lineSpan(l);
-  const bin = formOnLine(q, a, b);
-  const roots = quadraticRootsApprox(bin[0], bin[1], bin[2]);
-  const real = realPoints ?? bin[1] * bin[1] - 4n * bin[0] * bin[2] > 0n;
-  return roots.map((r) => {
-    const ap = pencilPointApprox(a, b, r);
-    return {
-      point: null,
-      conjugates: { on: [a, b] as const, binary: bin },
-      approx: ap.re,
-      approxImag: real ? null : ap.im,
-      real,
-      multiplicity: 2 as const,
-      kind: 'node' as const,
-      ordinary: true,
-      split: null,
-      realKind: real ? ('crunode' as const) : null,
-      tangents,
-      milnor: 1,
-      tjurina: 1,
-    };
-  });
+  return conjugateNodes(conjugatesOnLine(a, b, formOnLine(q, a, b)), tangents);
 }
 
 /** The singular point of an absolutely irreducible cubic, or null when it is smooth. */
@@ -192,14 +190,7 @@ export function cubicSingularPoints(f0: Form): CubicSingularities {
       points.push(triplePointAt(comps.vertex as Point, [f]));
       break;
     case 'three conjugate lines':
-      for (const v of triangleVerticesApprox(f)) {
-        const real = v.im.every((x) => Math.abs(x) < 1e-9 * Math.max(1, ...v.re.map(Math.abs)));
-        points.push({
-          point: null, conjugates: null, approx: v.re, approxImag: real ? null : v.im, real,
-          multiplicity: 2, kind: 'node', ordinary: true, split: null, realKind: real ? 'crunode' : null,
-          tangents: [f], milnor: 1, tjurina: 1,
-        });
-      }
+      points.push(...conjugateNodes(triangleVertices(f), [f]));
       break;
     case 'line and conic': {
       const l = lineOf(lineComps[0]);
@@ -210,7 +201,7 @@ export function cubicSingularPoints(f0: Form): CubicSingularities {
       if (isSquare(disc)) {
         for (const p of rationalRootsOfSquareQuadratic(c0, c1, c2, a, b)) points.push(doublePointAt(f, p, false));
       } else {
-        points.push(...conjugatePair(l, q, [lineForm(l), q], null));
+        points.push(...conjugatePair(l, q, [lineForm(l), q]));
       }
       break;
     }
@@ -229,7 +220,7 @@ export function cubicSingularPoints(f0: Form): CubicSingularities {
       const v = comps.vertex as Point;
       const real = linePairIsReal(q, v);
       points.push(rationalPoint(v, { multiplicity: 2, kind: 'node', ordinary: true, split: false, realKind: real ? 'crunode' : 'acnode', tangents: [q] }));
-      points.push(...conjugatePair(l, q, [lineForm(l), q], real));
+      points.push(...conjugatePair(l, q, [lineForm(l), q]));
       break;
     }
     case 'three concurrent lines':

@@ -93,7 +93,28 @@ describe('singular points of cubics agree with Singular (live)', () => {
         if (p.point) script += `loc(${poly}, ${n}, ${k}, ${chart(p.point)});\n`;
       });
     });
+    // Every orbit of conjugate singular points, checked in Singular over Q(u) with minpoly: the partials
+    // vanish at (coords(u)).
+    const orbits: { n: number; k: number; poly: string }[] = [];
+    curves.forEach((c, n) => {
+      const seen = new Set<object>();
+      ours[n].points.forEach((p, k) => {
+        if (!p.conjugates || seen.has(p.conjugates)) return;
+        seen.add(p.conjugates);
+        const o = p.conjugates;
+        const up = (q: readonly bigint[]) => q.map((a, i) => `(${a})*u^${i}`).join('+') || '0';
+        script += `ring rk_${n}_${k} = (0,u),(x,y,z),dp; minpoly = ${up(o.poly)};\n`;
+        script += `print("O ${n} ${k} " + string(size(subst(jacob(${singularPoly(c.curve)}), x, ${up(o.coords[0])}, y, ${up(o.coords[1])}, z, ${up(o.coords[2])}))));\n`;
+        script += 'setring r;\n';
+        orbits.push({ n, k, poly: up(o.poly) });
+      });
+    });
     const lines = singular(script, 120_000);
+    for (const o of orbits) {
+      const line = lines.find((l) => l.startsWith(`O ${o.n} ${o.k} `));
+      expect(line, `seed ${seed}, curve ${o.n}: orbit over ${o.poly} (${formToText(curves[o.n].curve)})`).toBe(`O ${o.n} ${o.k} 0`);
+    }
+    expect(orbits.length).toBeGreaterThan(5);
     const byKey = new Map<string, string[]>();
     for (const l of lines) {
       const parts = l.trim().split(/\s+/);

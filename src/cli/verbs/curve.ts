@@ -12,6 +12,9 @@ import { pointToString } from '../../plane/parse-point.ts';
 import { positionalAt } from '../args.ts';
 import { cubicReport } from '../../cubic/curve-report.ts';
 import { formSingularPoints } from '../../cubic/singular-general.ts';
+import type { ConjugatePoints } from '../../cubic/conjugate-points.ts';
+import { algebraicToDecimal } from '../../exact/algebraic.ts';
+import { upolyToString } from '../../exact/upoly.ts';
 
 /** An equation as text: affine unless the form contains the line at infinity (then homogeneous). */
 export function equationText(f: Form, homogeneous = false): string {
@@ -62,6 +65,15 @@ export const curve: Verb = {
   },
 };
 
+/** An orbit of conjugate points as text: the polynomial in u and the three coordinates in u. */
+function conjugatesJson(c: ConjugatePoints): unknown {
+  return {
+    poly: `${upolyToString(c.poly, 'u')} = 0`,
+    coords: c.coords.map((x) => upolyToString(x, 'u')),
+    note: 'the points (coords[0] : coords[1] : coords[2]) for the roots u of poly; "root" is the u of a real one',
+  };
+}
+
 function cubicJson(f: Form, eq: (g: Form) => string): unknown {
   const r = cubicReport(f);
   const s = r.singularities;
@@ -88,9 +100,8 @@ function cubicJson(f: Form, eq: (g: Form) => string): unknown {
         realKind: p.realKind,
         milnor: p.milnor,
         tjurina: p.tjurina,
-        ...(p.conjugates
-          ? { conjugates: { on: p.conjugates.on.map(pointToString), roots: p.conjugates.binary.map(String), note: 'the points s·A + t·B for the roots (s:t) of roots[0]s^2 + roots[1]st + roots[2]t^2, A and B the points in "on"' } }
-          : {}),
+        ...(p.conjugates ? { conjugates: conjugatesJson(p.conjugates) } : {}),
+        ...(p.root ? { root: { decimal: algebraicToDecimal(p.root, 15), lo: ratToString(p.root.lo), hi: ratToString(p.root.hi) } } : {}),
       })),
       ...s.lines.map((l) => ({
         point: null,

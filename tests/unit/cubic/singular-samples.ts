@@ -136,6 +136,13 @@ export function singularSample(rand: () => number, k: number): SingularSample {
       const f = cubic(`X^3 - ${d} Y^3`);
       return { family: 'conjugate concurrent lines', f, shape: 'three conjugate concurrent lines', rational: [{ point: [0n, 0n, 1n] as Point, kind: 'triple point' }], count: 1 };
     },
+    () => {
+      // Three lines conjugate over Q(∛d), not concurrent: the norm of X + αY + α²Z for α³ = d is
+      // X³ + dY³ + d²Z³ − 3dXYZ (common practice: the norm form of a pure cubic field).
+      const d = [2n, 3n, 5n, 6n, 7n, 10n, -2n, -3n][Math.floor(rand() * 8)];
+      const f = cubic(`X^3 + ${d} Y^3 + ${d * d} Z^3 - ${3n * d} X Y Z`);
+      return { family: 'conjugate triangle', f, shape: 'three conjugate lines', rational: [], count: 3 };
+    },
   ];
   const fam = families[k % families.length]();
   const m = randomUnimodular(rand);
@@ -145,5 +152,5 @@ export function singularSample(rand: () => number, k: number): SingularSample {
   return { family: fam.family, curve, shape: fam.shape, rational, count: fam.count, matrix: m };
 }
 
-export const SAMPLE_FAMILIES = 11;
+export const SAMPLE_FAMILIES = 12;
 
