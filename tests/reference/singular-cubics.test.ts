@@ -7,9 +7,11 @@
 // singular points over C), factorize(F) over Q (component degrees and multiplicities), and at each of our
 // rational singular points, moved to the origin of an affine chart in a local ring (ds): the order
 // (multiplicity), milnor, tjurina (sing.lib) and factorize of the tangent cone jet(g, ord g) — which
-// decides our split test (two rational lines, a quadratic irreducible over Q, a double line). The kind
-// follows from (order, μ): A1 node (2, 1), A2 cusp (2, 2), A3 tacnode (2, 3), D4 ordinary triple point
-// (3, 4) (Arnold's list; Greuel, Lossen, Shustin, Introduction to Singularities and Deformations, I.2).
+// decides our split test (two rational lines, a quadratic irreducible over Q, a double line), and
+// classify (classify.lib) for the kind: A[1] node, A[2] cusp, A[3] tacnode, D[4] ordinary triple point,
+// consistent with (order, μ) = (2, 1), (2, 2), (2, 3), (3, 4) (Arnold's list; Greuel, Lossen, Shustin,
+// Introduction to Singularities and Deformations, I.2). Orbits of conjugate points are checked over
+// Q(u) with Singular's minpoly: the partials vanish at our polynomial coordinates.
 import { describe, expect, it } from 'vitest';
 import { seededRandom, singular } from './oracles.ts';
 import { formToText } from '../../src/poly/print.ts';
@@ -38,7 +40,7 @@ function chart(p: readonly bigint[]): string {
   return sub.join(', ');
 }
 
-const PRELUDE = `LIB "elim.lib"; LIB "primdec.lib"; LIB "sing.lib";
+const PRELUDE = `LIB "elim.lib"; LIB "primdec.lib"; LIB "sing.lib"; LIB "classify.lib";
 ring r = 0,(x,y,z),dp;
 proc rep(poly f, int n) { ideal J = jacob(f); def S0 = sat(J, maxideal(1)); ideal S = S0[1]; ideal Ss = std(S);
   list fa = factorize(f); string s = "C " + string(n) + " " + string(dim(Ss)) + " " + string(mult(Ss)) + " " + string(mult(std(radical(S)))) + " F";
@@ -49,7 +51,23 @@ proc loc(poly f, int n, int k, poly a, poly b, poly c) { map m = basering, a, b,
   string s = "P " + string(n) + " " + string(k) + " " + string(ord(g)) + " " + string(milnor(g)) + " " + string(tjurina(g)) + " T";
   int i; for (i = 1; i <= size(tc[1]); i++) { if (deg(tc[1][i]) > 0) { s = s + " " + string(deg(tc[1][i])) + "^" + string(tc[2][i]); } }
   print(s); }
+proc kind(poly f, int n, int k, poly a, poly b, poly c) { map m = basering, a, b, c; poly h = m(f); def R0 = basering;
+  ring rl3 = 0,(x,y),ds; poly g = imap(R0, h); print("K " + string(n) + " " + string(k) + " begin"); def cl = classify(g); print("K end"); }
 `;
+
+/** Arnold's names of our kinds, as Singular's classify prints them (classify.lib). */
+const ARNOLD: Record<string, string> = { node: 'A[1]', cusp: 'A[2]', tacnode: 'A[3]', 'triple point': 'D[4]' };
+
+/** The type classify printed for point k of curve n ("... is R-equivalent to A[1]."), or null. */
+function classifiedType(lines: readonly string[], n: number, k: number): string | null {
+  const start = lines.findIndex((l) => l.trim() === `K ${n} ${k} begin`);
+  if (start < 0) return null;
+  for (let i = start + 1; i < lines.length && lines[i].trim() !== 'K end'; i++) {
+    const m = /R-equivalent to ([A-Z]\[\d+\])/.exec(lines[i]);
+    if (m) return m[1];
+  }
+  return null;
+}
 
 /** What Singular's factorisation of the tangent cone must look like for our answer at a rational point. */
 function expectedCone(p: SingularPoint): string {
@@ -90,7 +108,7 @@ describe('singular points of cubics agree with Singular (live)', () => {
       const poly = singularPoly(c.curve);
       script += `rep(${poly}, ${n});\n`;
       ours[n].points.forEach((p, k) => {
-        if (p.point) script += `loc(${poly}, ${n}, ${k}, ${chart(p.point)});\n`;
+        if (p.point) script += `loc(${poly}, ${n}, ${k}, ${chart(p.point)});\nkind(${poly}, ${n}, ${k}, ${chart(p.point)});\n`;
       });
     });
     // Every orbit of conjugate singular points, checked in Singular over Q(u) with minpoly: the partials
@@ -150,6 +168,7 @@ describe('singular points of cubics agree with Singular (live)', () => {
         expect(Number(milnor), pctx).toBe(p.milnor);
         expect(Number(tjurina), pctx).toBe(p.tjurina);
         expect(cone.sort().join(' '), `${pctx}: tangent cone over Q`).toBe(expectedCone(p));
+        expect(classifiedType(lines, n, k), `${pctx}: Singular classify`).toBe(ARNOLD[p.kind]);
         checkedPoints++;
       });
     });
