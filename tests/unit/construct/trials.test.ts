@@ -121,3 +121,18 @@ describe('theorem trials', () => {
     expect(curvePointRandom(formParse('x^3 + 2y^3 = 7x + 1').form, [], seededUniform(1), 12)).toBeNull();
   });
 });
+
+describe('the trials job of the page worker', () => {
+  it('posts progress with tallies, then the report, all as plain data', async () => {
+    const { trialsJobRun } = await import('../../../src/ui/scene-trials/trials-job.ts');
+    const replies: unknown[] = [];
+    trialsJobRun({ kind: 'trials', job: 3, doc: falseClaim(), count: 4, seed: 2 }, (r) => replies.push(structuredClone(r)));
+    expect(replies.map((r) => (r as { kind: string }).kind)).toEqual(['progress', 'progress', 'progress', 'progress', 'done']);
+    const last = replies[3] as { done: number; checks: { held: number; failed: number }[] };
+    expect(last.done).toBe(4);
+    expect(last.checks[0].held + last.checks[0].failed).toBe(4);
+    const done = replies[4] as { job: number; report: { completed: number } };
+    expect(done.job).toBe(3);
+    expect(done.report.completed).toBe(4);
+  });
+});
