@@ -2,7 +2,8 @@
 // singular point, or the point with parameter S:T.
 import type { Verb } from '../verb.ts';
 import { InvalidInput } from '../../exact/errors.ts';
-import { primitive } from '../../exact/integer.ts';
+import { lcm, primitive } from '../../exact/integer.ts';
+import { RAT_ONE, ratParse } from '../../exact/rational.ts';
 import { pointToString } from '../../plane/parse-point.ts';
 import { formToText } from '../../poly/print.ts';
 import { binaryFormRoots } from '../../poly/binary-roots.ts';
@@ -28,13 +29,14 @@ export function binaryText(b: readonly bigint[]): string {
   return terms.length ? terms.join('') : '0';
 }
 
+/** S:T with rational S, T (denominators cleared), or a single rational u meaning u:1. */
 function parameterArg(text: string): [bigint, bigint] {
-  const m = /^\s*([+-]?\d+)\s*:\s*([+-]?\d+)\s*$/.exec(text);
-  if (!m) throw new InvalidInput(`expected a parameter S:T with integers S, T (e.g. 2:-3), found "${text}"`, '--at');
-  const s = BigInt(m[1]);
-  const t = BigInt(m[2]);
-  if (s === 0n && t === 0n) throw new InvalidInput('0:0 is not a parameter', '--at');
-  return [s, t];
+  const parts = text.split(':');
+  if (parts.length > 2) throw new InvalidInput(`expected a parameter S:T (e.g. 2:-3 or 1/2:5), found "${text}"`, '--at');
+  const [s, t] = parts.length === 2 ? parts.map((x) => ratParse(x, '--at')) : [ratParse(parts[0], '--at'), RAT_ONE];
+  if (s.num === 0n && t.num === 0n) throw new InvalidInput('0:0 is not a parameter', '--at');
+  const l = lcm(s.den, t.den);
+  return [(s.num * l) / s.den, (t.num * l) / t.den];
 }
 
 /** The parameters over the singular point: "s:t" strings when rational, else the quadratic and its roots. */
