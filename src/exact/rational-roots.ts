@@ -163,8 +163,8 @@ export function upolySquarefreeRationalRoots(f: readonly bigint[], options: Rati
       } else if (last || r.exact) open.splice(i--, 1);
     }
     if (last) break;
-    // Before paying for finer widths, see whether another prime shows that the search is complete.
-    while (count < bound.best && bound.tighten() && count < bound.best);
+    // Before paying for finer widths, see whether one more prime shows that the search is complete.
+    if (count < bound.best) bound.tighten();
   }
   return found.sort(ratCmp);
 }

@@ -97,8 +97,10 @@ export function modPolyRootCount(p: readonly number[], l: number): number {
   const d = f.length - 1;
   if (d === 1) return 1;
   // x^l mod f, left-to-right binary powering; multiplying by x is a shift and one reduction step.
-  let r = new Float64Array(d);
-  r[1 % d] = d === 1 ? 0 : 1;
+  // Entries of a square are below d·l² < 2^37 and each reduction step subtracts less than l² more, so
+  // the doubles stay exact with one % per coefficient instead of one per operation.
+  const r = new Float64Array(d);
+  r[1] = 1;
   const prod = new Float64Array(2 * d - 1);
   const topBit = 31 - Math.clz32(l);
   for (let bit = topBit - 1; bit >= 0; bit--) {
@@ -108,23 +110,26 @@ export function modPolyRootCount(p: readonly number[], l: number): number {
       if (a === 0) continue;
       for (let j = 0; j < d; j++) prod[i + j] += a * r[j];
     }
-    for (let k = 2 * d - 2; k >= 0; k--) prod[k] %= l;
     for (let k = 2 * d - 2; k >= d; k--) {
       const c = prod[k] % l;
       if (c === 0) continue;
-      for (let j = 0; j < d; j++) prod[k - d + j] -= c * f[j];
-      // keep the lower entries bounded so later products stay exact
-      for (let j = 0; j < d; j++) prod[k - d + j] %= l;
+      const base = k - d;
+      for (let j = 0; j < d; j++) prod[base + j] -= c * f[j];
     }
-    const next = new Float64Array(d);
-    for (let k = 0; k < d; k++) next[k] = ((prod[k] % l) + l) % l;
-    r = next;
+    for (let k = 0; k < d; k++) {
+      const v = prod[k] % l;
+      r[k] = v < 0 ? v + l : v;
+    }
     if ((l >> bit) & 1) {
-      // r·x mod f
       const top = r[d - 1];
       for (let k = d - 1; k >= 1; k--) r[k] = r[k - 1];
       r[0] = 0;
-      if (top !== 0) for (let j = 0; j < d; j++) r[j] = (((r[j] - top * f[j]) % l) + l) % l;
+      if (top !== 0) {
+        for (let j = 0; j < d; j++) {
+          const v = (r[j] - top * f[j]) % l;
+          r[j] = v < 0 ? v + l : v;
+        }
+      }
     }
   }
   const xl: number[] = Array.from(r);
