@@ -249,7 +249,7 @@ export function weierstrassInverse(model: WeierstrassModel, target: ModelPoint, 
     const pt = [0, 1, 2].map((i) => adj[0][i] * target[0] + adj[1][i] * target[1] + adj[2][i] * target[2]);
     candidates.push(triple(pt[0], pt[1], pt[2]));
   } else {
-    candidates.push(...nonFlexInverse(model, image.x, image.y));
+    candidates.push(...weierstrassInverseNonFlex(model, image.x.num, image.x.den, image.y.num, image.y.den));
   }
   for (const c of candidates) {
     if (formEval(f, c) !== 0n) continue;
@@ -262,14 +262,17 @@ export function weierstrassInverse(model: WeierstrassModel, target: ModelPoint, 
 // Assumes a non-flex model. On the line ℓ: den(x)·L' − num(x)·T through O', write P = s·O' + D. Since T and
 // T' pass through O', y = T'M/T² becomes T'(D)(s·M(O') + M(D))/T(D)², linear in s: no square root.
 // When ℓ is the tangent at O' (T'(D) = 0) the points of that x are O' and O' * O'.
-function nonFlexInverse(model: WeierstrassModel, x: Rational, y: Rational): Point[] {
+/**
+ * The candidates for the point with image (xn/xd, yn/yd) on the construction model, O not a flex
+ * (internal tier: the fractions need not be reduced, only xd, yd ≠ 0). One point, or O' and O' * O'.
+ */
+export function weierstrassInverseNonFlex(model: WeierstrassModel, xn: bigint, xdIn: bigint, yn: bigint, ydIn: bigint): Point[] {
   const { xLine, tangent, yLine } = model.lines;
   const o2 = model.lines.second!;
   const t2 = model.lines.secondTangent!;
   const c = model.construction;
   // x on the construction model is scale·L'/T and y is yScale·T'M/T².
-  const xn = x.num;
-  const xd = x.den * c.scale;
+  const xd = xdIn * c.scale;
   const ell = [0, 1, 2].map((i) => xd * xLine[i] - xn * tangent[i]);
   let d: readonly bigint[] = [0n, 0n, 0n];
   for (const e of UNIT) {
@@ -279,8 +282,7 @@ function nonFlexInverse(model: WeierstrassModel, x: Rational, y: Rational): Poin
   const tD = dot(tangent, d);
   const t2D = dot(t2, d);
   if (t2D === 0n) return [o2, tangentThird(model.curve, o2)];
-  const yn = y.num;
-  const yd = y.den * c.yScale;
+  const yd = ydIn * c.yScale;
   const s = yn * tD * tD - yd * t2D * dot(yLine, d);
   const t = yd * t2D * dot(yLine, o2);
   const v = [s * o2[0] + t * d[0], s * o2[1] + t * d[1], s * o2[2] + t * d[2]];
