@@ -86,11 +86,15 @@ export function cubicParametrisation(f0: Form): CubicParametrisation {
   }
   const sp = sing.points[0];
   const p = sp.point as Point;
+  // The coordinate pencils keep the familiar slope shape (x = m² − c, y = m(m² − c) for y² = x³ + cx²):
+  // the first usable one wins ties among them; another pencil is taken only when its map is at least
+  // four times smaller (2 bits), so a curve in normal form keeps its standard parametrisation.
   let best: { basis: [Point, Point]; map: [bigint[], bigint[], bigint[]]; size: number } | null = null;
   for (const [a, b] of candidateBases(p)) {
     const map = mapFor(f, p, a, b);
     const size = mapSize(map);
-    if (!best || size < best.size) best = { basis: [a, b], map, size };
+    const coordinate = [a, b].every((v) => v.filter((x) => x !== 0n).length === 1);
+    if (!best || size + (coordinate ? 0 : 2) < best.size) best = { basis: [a, b], map, size };
   }
   const { basis, map } = best as NonNullable<typeof best>;
   const check = formOnParametrisation(f, map[0], map[1], map[2]);
