@@ -12,6 +12,8 @@ import { formEval, formFromCoeffs, formGradientAt, type Form } from '../../src/p
 import { formParse } from '../../src/poly/parse.ts';
 import { triple, tripleIsZero, type Point } from '../../src/plane/point.ts';
 import { gp, seededRandom } from './oracles.ts';
+import { algebraicMeetPointDecimals } from '../../src/cubic/meet-decimal.ts';
+import { rat, ratAbs, ratCmp, ratMul, ratParse, ratSub } from '../../src/exact/rational.ts';
 import { formToGp, key, MEET_GP, parseMeet, randomMember, randomPoints } from './pari-cubic-helpers.ts';
 
 function compareMeet(ctx: string, f: Form, g: Form, meet: ReturnType<typeof curveCurveMeet>, pari: ReturnType<typeof parseMeet>): void {
@@ -103,3 +105,32 @@ describe('flexes (PARI/GP Hessian by matdet, meet by polresultant + factor, live
     expect(k).toBeGreaterThan(10);
   });
 });
+
+describe('irrational meet points to 30 digits (PARI/GP polresultant + polrootsreal at 60 digits, live)', () => {
+  it('the affine x of every real irrational point agrees with PARI to 30 significant digits', () => {
+    const pairs = [
+      ['x^2 + y^2 = 5', 'y = x^3 - 2x'],
+      ['y^2 = x^3 - 3x + 4', 'x^2 - 3y^2 = 2'],
+      ['x^3 + 2y^3 = 7xy', 'x + 3y = 4'],
+    ].map(([a, b]) => [formParse(a).form, formParse(b).form] as const);
+    const script = 'default(realprecision, 60);\n' + pairs.map(([f, g]) => `print(polrootsreal(polresultant(subst(${formToGp(f)}, z, 1), subst(${formToGp(g)}, z, 1), y)));`).join('\n');
+    const out = gp(script);
+    pairs.forEach(([f, g], i) => {
+      const pari = out[i].replace(/[\[\]~]/g, '').split(',').map((t) => t.trim()).filter((t) => t.length > 0).map((t) => ratParse(t));
+      const ours = curveCurveMeet(f, g).points.filter((p) => p.algebraic);
+      expect(ours.length).toBeGreaterThan(0);
+      for (const p of ours) {
+        const [x] = algebraicMeetPointDecimals(p.algebraic!, 30).affine!;
+        const q = ratParse(x);
+        // some PARI root within 1e-28 relative of ours (ours is rounded to 30 digits)
+        const close = pari.some((r) => {
+          const d = ratSub(q, r);
+          const scale = ratAbs(r).num === 0n ? rat(1) : ratAbs(r);
+          return ratCmp(ratAbs(d), ratMul(scale, rat(1, 10n ** 28n))) <= 0;
+        });
+        expect(close, `pair ${i}: x = ${x}; PARI: ${out[i]}`).toBe(true);
+      }
+    });
+  });
+});
+

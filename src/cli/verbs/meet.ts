@@ -2,6 +2,7 @@
 // summing to the product of the degrees (Bézout); non-real points are counted and approximated.
 import type { Verb } from '../verb.ts';
 import { curveCurveMeet, type MeetPoint } from '../../cubic/meet.ts';
+import { algebraicMeetPointDecimals } from '../../cubic/meet-decimal.ts';
 import { algebraicToDecimal } from '../../exact/algebraic.ts';
 import { InvalidInput } from '../../exact/errors.ts';
 import { ratToString } from '../../exact/rational.ts';
@@ -22,6 +23,8 @@ function pointJson(m: MeetPoint): Record<string, unknown> {
     const a = alg.alpha;
     const root = { poly: a.poly, interval: [ratToString(a.lo), ratToString(a.hi)], decimal: algebraicToDecimal(a, 20) };
     // Exact: α is the root of poly in the interval; the point is α·p + q, or frame·(α, yNum(α)/yDen(α), 1).
+    // 20 significant digits, each decided by interval refinement (meet-decimal.ts).
+    out.decimal = algebraicMeetPointDecimals(alg, 20);
     out.algebraic =
       alg.kind === 'line'
         ? { kind: 'line', alpha: root, p: pointToString(alg.p), q: pointToString(alg.q) }
@@ -34,7 +37,7 @@ export const meet: Verb = {
   name: 'meet',
   usage:
     'meet EQ1 EQ2 — the common points of two curves with multiplicities (Bézout, complex points counted): ' +
-    '{"points": [{"point" or null, "approx", "multiplicity", "real"}], "total", "commonComponent", "note"}',
+    '{"points": [{"point" or null, "approx", "multiplicity", "real", "decimal", "algebraic"}], "total", "commonComponent", "note"}',
   run(args) {
     for (const name of args.options.keys()) throw new InvalidInput(`meet takes no options, found --${name}`, `--${name}`);
     if (args.positional.length > 2) throw new InvalidInput(`meet takes two equations, found ${args.positional.length} arguments`, 'argument 3');
