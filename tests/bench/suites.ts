@@ -5,5 +5,6 @@ import { gcdBench, rootsBench } from './roots.bench.ts';
 import { nineBench } from './nine.bench.ts';
 import { curveBench } from './curve.bench.ts';
 import { traceBench } from './trace.bench.ts';
+import { scenesBench } from './scenes.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench, scenesBench];
