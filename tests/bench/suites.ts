@@ -6,5 +6,6 @@ import { nineBench } from './nine.bench.ts';
 import { curveBench } from './curve.bench.ts';
 import { traceBench } from './trace.bench.ts';
 import { scenesBench } from './scenes.bench.ts';
+import { groupBench } from './group.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench, scenesBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench, scenesBench, groupBench];

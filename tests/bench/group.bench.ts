@@ -1,0 +1,63 @@
+// Suite "group law": nP for n = 1..200 on a rank-one curve given as a general cubic with a non-flex base
+// point, against PARI/GP's ellmul on its Weierstrass model, PARI timed inside gp (getabstime around the
+// loop, so process start-up is excluded). Printed, never asserted.
+//
+// The curve: y² + y = x³ − x (rank one, generator (0, 0): Cremona's 37a1) carried to a general cubic by
+// a fixed unimodular matrix, base point the image of (1, 0) (not a flex), P the image of (0, 0). Our
+// answers are the cubic's points; a spot check maps a few back through our Weierstrass map and compares
+// with PARI's multiples before timing.
+import { gp, seededRandom } from '../reference/oracles.ts';
+import { medianMs, type BenchFigure, type BenchSuite } from './bench.ts';
+import { pointPullBack, randomUnimodular, weierstrassCubic } from '../unit/cubic/group-samples.ts';
+import { formTransform } from '../../src/poly/transform.ts';
+import { groupAddIn, groupMake, groupMultipleIn } from '../../src/cubic/group.ts';
+import { cubicIsFlex } from '../../src/cubic/chord.ts';
+import { weierstrassMap, weierstrassModel } from '../../src/cubic/weierstrass.ts';
+import { ratToString } from '../../src/exact/rational.ts';
+
+const A = [0n, 0n, 1n, -1n, 0n];
+const N = 200;
+
+export const groupBench: BenchSuite = {
+  name: 'group law',
+  async run(): Promise<BenchFigure[]> {
+    const mat = randomUnimodular(seededRandom(9), 6);
+    const f = formTransform(weierstrassCubic(A), mat);
+    const o = pointPullBack(mat, [1n, 0n, 1n]);
+    const p = pointPullBack(mat, [0n, 0n, 1n]);
+    if (cubicIsFlex(f, o)) throw new Error('bench curve: the base point should not be a flex');
+    const g = groupMake(f, o);
+
+    // Spot check against PARI on the minimal model (which is 37a1 itself), through our map.
+    const model = weierstrassModel(f, o);
+    const checks = [7, 50, 199].map((n) => {
+      const im = weierstrassMap(model, groupMultipleIn(g, p, BigInt(n)));
+      return im === 'infinity' ? '[0]' : `[${ratToString(im.x)}, ${ratToString(im.y)}]`;
+    });
+    const pari = gp(`E=ellinit([${model.a.join(',')}]); Q=ellmul(E,[${(() => { const im = weierstrassMap(model, p); return im === 'infinity' ? '0' : `${ratToString(im.x)},${ratToString(im.y)}`; })()}],1); print(ellmul(E,Q,7)); print(ellmul(E,Q,50)); print(ellmul(E,Q,199));`);
+    const agree = checks.every((c, k) => c === pari[k]);
+
+    const eachMs = medianMs(() => {
+      for (let n = 1; n <= N; n++) groupMultipleIn(g, p, BigInt(n));
+    }, 5, 1);
+    const seqMs = medianMs(() => {
+      let acc = g.base;
+      for (let n = 1; n <= N; n++) acc = groupAddIn(g, acc, p);
+    }, 5, 1);
+    const big = medianMs(() => groupMultipleIn(g, p, 1000n), 3, 1);
+
+    const reps = 20;
+    const gpOut = gp([
+      `E=ellinit([${A.join(',')}]); P=[0,0];`,
+      `t=getabstime(); for(r=1,${reps}, for(n=1,${N}, ellmul(E,P,n))); print((getabstime()-t)/${reps}.);`,
+      `t=getabstime(); for(r=1,${reps}, Q=[0]; for(n=1,${N}, Q=elladd(E,Q,P))); print((getabstime()-t)/${reps}.);`,
+      `t=getabstime(); for(r=1,5, ellmul(E,P,1000)); print((getabstime()-t)/5.);`,
+    ].join('\n'));
+    const [pEach, pSeq, pBig] = gpOut.map(Number);
+    return [
+      { label: `nP for each n = 1..${N} (double-and-add), general cubic, non-flex base`, values: { ninefoldMs: eachMs, pariMs: pEach, ratio: eachMs / Math.max(pEach, 0.001), checkedAgainstPari: agree ? 'yes' : 'NO' } },
+      { label: `P, 2P, ..., ${N}P by repeated addition`, values: { ninefoldMs: seqMs, pariMs: pSeq, ratio: seqMs / Math.max(pSeq, 0.001) } },
+      { label: '1000P (about 33,000 digits)', values: { ninefoldMs: big, pariMs: pBig, ratio: big / Math.max(pBig, 0.001) } },
+    ];
+  },
+};
