@@ -6,6 +6,7 @@ import type { Form } from '../poly/form.ts';
 import { pointParse } from '../plane/parse-point.ts';
 import type { Point } from '../plane/point.ts';
 import { cubicRequire, cubicRequireSmoothPoint } from '../cubic/chord.ts';
+import { cubicFlexes } from '../cubic/flex.ts';
 import { optionString, positionalAt, type Args } from './args.ts';
 import type { Rational } from '../exact/rational.ts';
 import { ratToString } from '../exact/rational.ts';
@@ -38,13 +39,28 @@ export function optionSmoothPoint(args: Args, f: Form, name: string): Point | un
 }
 
 /**
- * The base point of the group law: --base when given. Without it the engine would use a rational flex;
- * until the flex finder is wired in, --base is required and its absence is a clear error.
+ * The base point of the group law: --base when given, else the rational flex of least height (from
+ * src/cubic/flex.ts); with neither, a clear error asking for --base.
  */
 export function argBase(args: Args, f: Form, option = 'base'): Point {
   const o = optionSmoothPoint(args, f, option);
   if (o !== undefined) return o;
-  throw new InvalidInput(`--${option} is needed: give the base point O of the group law as --${option} X:Y:Z`, `--${option}`);
+  const flexes = cubicFlexes(f);
+  const flex = flexes.degenerate === null ? flexes.rational.find((p) => isSmooth(f, p)) : undefined;
+  if (flex !== undefined) return flex;
+  throw new InvalidInput(
+    `--${option} is needed: the curve has no rational flex to use as the base point, so give O as --${option} X:Y:Z`,
+    `--${option}`,
+  );
+}
+
+function isSmooth(f: Form, p: Point): boolean {
+  try {
+    cubicRequireSmoothPoint(f, p);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 /** An integer written as positional argument `index`, within ±limit. */
