@@ -1,6 +1,7 @@
 // Singular points of cubics: seeded families with a known configuration (normal forms of our own moved by
 // unimodular changes of coordinates), published examples, and Silverman's node/cusp criterion.
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { seededRandom } from '../../reference/oracles.ts';
 import { formParse } from '../../../src/poly/parse.ts';
 import { formToText } from '../../../src/poly/print.ts';
@@ -86,6 +87,26 @@ describe('published examples', () => {
       expect(s.points.length, `k=${k}, u=${u}`).toBe(1);
       expect(s.points[0].kind, `k=${k}, u=${u}`).toBe(inv.c4.num !== 0n ? 'node' : 'cusp');
       expect(s.points[0].point, `k=${k}, u=${u}`).toEqual(triple(k + u, 0n, 1n));
+    }
+  });
+});
+
+describe('smoothness against the discriminant (an independent method: Aronhold invariants, src/cubic/invariants.ts)', () => {
+  it('smooth exactly when T² + 64S³ ≠ 0, on random cubics with small coefficients and on the samples (fast-check)', () => {
+    const small = fc.bigInt({ min: -3n, max: 3n });
+    fc.assert(
+      fc.property(fc.array(small, { minLength: 10, maxLength: 10 }), (c) => {
+        fc.pre(c.some((x) => x !== 0n));
+        const f = { degree: 3, coeffs: c };
+        const smooth = cubicSingularPoints(f).smooth;
+        expect(smooth, formToText(f)).toBe(cubicInvariants(f).discriminant.num !== 0n);
+      }),
+      { numRuns: 400 },
+    );
+    const rand = seededRandom(11);
+    for (let n = 0; n < SAMPLE_FAMILIES * 2; n++) {
+      const s = singularSample(rand, n);
+      expect(cubicInvariants(s.curve).discriminant.num, `seed 11, sample ${n} (${s.family})`).toBe(0n);
     }
   });
 });
