@@ -6,7 +6,9 @@
 // algebraic = ring, approximate = dashed ring. Selection = a wide pale halo, hover = a thin dark halo.
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
 import { curvePrepare, curveTrace, type PreparedCurve } from '../../shaders-free-render/trace.ts';
-import type { ConstructionDoc, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
+import type { ConstructionDoc, CurveValue, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
+import type { Form } from '../poly/form.ts';
+import { curveLandmarks } from '../poly/curve-landmarks.ts';
 import type { BlowupView, View } from './stores/interaction.ts';
 
 export interface DisplayExtras {
@@ -29,6 +31,24 @@ function style(stroke: string, width: number, fill: string, radius: number, dash
 }
 
 const PREPARED = new WeakMap<readonly number[], PreparedCurve | null>();
+const PREPARED_EXACT = new WeakMap<Form, PreparedCurve | null>();
+
+/** An exact curve is prepared with the core's exact landmarks (critical abscissae, lines of singular
+ * points), so its singular points are drawn right; a moving curve with a float search. */
+function preparedFor(v: CurveValue): PreparedCurve | null {
+  const f = v.form;
+  if (!f) return prepared(v.approx);
+  if (PREPARED_EXACT.has(f)) return PREPARED_EXACT.get(f)!;
+  let p: PreparedCurve | null;
+  try {
+    const l = curveLandmarks(f);
+    p = curvePrepare({ degree: f.degree, coeffs: v.approx }, { shear: l.shear, critical: l.critical, singularLines: l.singularLines });
+  } catch {
+    p = prepared(v.approx);
+  }
+  PREPARED_EXACT.set(f, p);
+  return p;
+}
 
 function prepared(coeffs: readonly number[]): PreparedCurve | null {
   if (PREPARED.has(coeffs)) return PREPARED.get(coeffs)!;
@@ -98,7 +118,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     const highlighted = extras.selection.has(o.id) || picked.has(o.id);
     const hovered = extras.hover === o.id;
     if (v.type === 'curve') {
-      const p = prepared(v.approx);
+      const p = preparedFor(v);
       if (!p) continue;
       let trace;
       try {

@@ -5,7 +5,7 @@ import type { ObjectValue } from '../construct/types.ts';
 import { $doc, $history, $values, docReset } from './stores/construction.ts';
 import { $selection, $tool, $view, noticeShow, worldToScreen } from './stores/interaction.ts';
 import { $search } from './stores/search.ts';
-import { persistRestore, persistSave } from './persist.ts';
+import { STORAGE_KEY, persistRestore, persistSave } from './persist.ts';
 import { NinefoldError } from '../exact/errors.ts';
 import { frameLog } from './components/nf-canvas.ts';
 import './components/nf-app.ts';
@@ -64,6 +64,13 @@ function installTestHook(): void {
     tool: () => $tool.get(),
     search: () => json($search.get()),
     frames: () => frameLog.slice(),
+    /** Start from an empty construction with the default view (tests begin from a known state). */
+    reset: () => {
+      window.localStorage.removeItem(STORAGE_KEY);
+      docReset(constructionEmpty());
+      $selection.set([]);
+      $view.set({ ...$view.get(), cx: 0, cy: 0, scale: 60 });
+    },
   };
 }
 

@@ -52,6 +52,7 @@ export class NfObjects extends LitElement {
                 tabindex="0"
                 class=${o.helperOf ? 'helper' : ''}
                 data-id=${o.id}
+                data-label=${o.label}
                 aria-selected=${sel.has(o.id) ? 'true' : 'false'}
                 title=${v?.type === 'failure' ? v.message : KINDS[o.construction.kind].words}
                 @click=${(e: MouseEvent) => this.pick(o.id, e.shiftKey)}
