@@ -11,7 +11,8 @@
 import { InvalidInput } from './errors.ts';
 import { bitLength } from './integer.ts';
 import { rat, ratCmp, type Rational } from './rational.ts';
-import { upolyDerivative, upolyEvalHomogeneous, upolySignAt } from './upoly.ts';
+import { upolyScaledFloats } from './float-roots.ts';
+import { upolyDerivative, upolySignAt } from './upoly.ts';
 
 export interface RootInterval {
   readonly lo: Rational;
@@ -119,13 +120,62 @@ export class RootRefiner {
 
   /** Refine until the width is at most 2^-bits. */
   refineToBits(bits: number): void {
+    if (!this.exact && this.k - bitLength(this.b - this.a - 1n) < bits) this.seed();
     while (!this.exact && this.k - bitLength(this.b - this.a - 1n) < bits) this.step();
   }
 
   /** Refine until the width is at most w (w > 0). */
   refineToWidth(w: Rational): void {
     if (w.num <= 0n) throw new InvalidInput('the target width must be positive', 'width');
+    if (!this.exact && (this.b - this.a) * w.den > w.num << BigInt(this.k)) this.seed();
     while (!this.exact && (this.b - this.a) * w.den > w.num << BigInt(this.k)) this.step();
+  }
+
+  /**
+   * Once per refiner: a floating safeguarded Newton inside the bracket proposes the root to ~45 bits, and
+   * the two dyadic grid points around the proposal are accepted as the new bracket only if f changes sign
+   * between them and they lie inside the old bracket. A bad proposal costs two evaluations and is dropped.
+   */
+  private seeded = false;
+  private seed(): void {
+    if (this.seeded) return;
+    this.seeded = true;
+    const den = 2 ** -this.k;
+    const lo = Number(this.a) * den;
+    const hi = Number(this.b) * den;
+    if (!Number.isFinite(lo) || !Number.isFinite(hi) || !(hi > lo) || this.k > 1000) return;
+    const x = floatRootIn(upolyScaledFloats(this.f), lo, hi, this.sa);
+    if (x === null) return;
+    const scale = Math.max(Math.abs(x), Number.MIN_VALUE * 2 ** 60);
+    const K = Math.max(this.k + 4, Math.ceil(44 - Math.log2(scale)));
+    if (K > 1060 || K - this.k > 4000) return;
+    for (const spread of [1n, 1n << 12n]) {
+      const m = BigInt(Math.round(x * 2 ** Math.min(K, 1000))) << BigInt(K - Math.min(K, 1000));
+      const l = m - spread;
+      const h = m + spread;
+      const up = BigInt(K - this.k);
+      if (l < this.a << up || h > this.b << up) return;
+      if (spread === 1n && upolyEvalDyadic(this.f, m, K) === 0n) {
+        this.exact = rat(m, 1n << BigInt(K)); // the proposal itself is the root (a dyadic root)
+        return;
+      }
+      const sl = sgn(upolyEvalDyadic(this.f, l, K));
+      if (sl === 0) {
+        this.exact = rat(l, 1n << BigInt(K));
+        return;
+      }
+      const sh = sgn(upolyEvalDyadic(this.f, h, K));
+      if (sh === 0) {
+        this.exact = rat(h, 1n << BigInt(K));
+        return;
+      }
+      if (sl === this.sa && sh === -this.sa) {
+        this.a = l;
+        this.b = h;
+        this.k = K;
+        return;
+      }
+    }
   }
 
   private bisect(): void {
@@ -181,6 +231,35 @@ export class RootRefiner {
     this.bisect();
     if (!this.exact) this.bisect();
   }
+}
+
+/**
+ * A root of the (scaled, floating) polynomial in (lo, hi) by Newton's method safeguarded by bisection
+ * (common practice; Press et al., "Numerical Recipes", §9.4, rtsafe). sLo = the sign of f at lo.
+ * Returns null when the floats cannot follow the sign change.
+ */
+function floatRootIn(c: Float64Array, lo: number, hi: number, sLo: number): number | null {
+  const n = c.length - 1;
+  let a = lo;
+  let b = hi;
+  let x = 0.5 * (a + b);
+  for (let it = 0; it < 100; it++) {
+    let p = c[n];
+    let dp = 0;
+    for (let i = n - 1; i >= 0; i--) {
+      dp = dp * x + p;
+      p = p * x + c[i];
+    }
+    if (!Number.isFinite(p) || !Number.isFinite(dp)) return null;
+    if (p === 0) return x;
+    if (Math.sign(p) === sLo) a = x;
+    else b = x;
+    let next = x - p / dp;
+    if (!(next > a && next < b)) next = 0.5 * (a + b);
+    if (Math.abs(next - x) <= 2 ** -52 * Math.abs(x) || next === a || next === b) return next;
+    x = next;
+  }
+  return x;
 }
 
 /** Does the rational x lie in the closed interval? */
