@@ -67,7 +67,8 @@ function classify(f: Form, p: Point): GeneralSingularPoint {
     };
   }
   const { lines, rest } = formLinearFactors(cone);
-  const tangents = [...lines.map((l) => lineForm(l.line)), ...(rest.degree > 0 ? [rest] : [])];
+  // Each rational tangent listed as often as it divides the cone; the rest (irrational tangents) as one form.
+  const tangents = [...lines.flatMap((l) => Array.from({ length: l.multiplicity }, () => lineForm(l.line))), ...(rest.degree > 0 ? [rest] : [])];
   let ordinary = lines.every((l) => l.multiplicity === 1);
   if (m === 3 && ordinary) {
     // The cone restricted to a pencil is a binary cubic: distinct tangents iff its discriminant ≠ 0.
