@@ -32,13 +32,27 @@ function signVariations(c: readonly bigint[], cap: number): number {
   return v;
 }
 
-/** Descartes bound for the roots of q in (0, 1), capped at 2. */
+/**
+ * Descartes bound for the roots of q in (0, 1), capped at 2: the sign variations of the coefficients of
+ * (x+1)^d q(1/(x+1)). The Taylor shift runs in passes and pass i fixes coefficient i, so counting stops as
+ * soon as two variations are certain (most inner nodes of the bisection tree).
+ */
 function descartes01(q: readonly bigint[]): number {
-  // Fast exits: all coefficients of one sign means no positive root at all.
+  // Fast exit: all coefficients of one sign means no positive root at all.
   if (signVariations(q, 1) === 0) return 0;
   const t = q.slice().reverse();
-  upolyTaylorShift1InPlace(t);
-  return signVariations(t, 2);
+  const n = t.length;
+  let v = 0;
+  let last = 0;
+  for (let i = 0; i < n; i++) {
+    for (let j = n - 2; j >= i; j--) t[j] += t[j + 1];
+    const x = t[i];
+    if (x === 0n) continue;
+    const sg = x > 0n ? 1 : -1;
+    if (last !== 0 && sg !== last && ++v >= 2) return 2;
+    last = sg;
+  }
+  return v;
 }
 
 /**
