@@ -17,7 +17,7 @@
 //
 // Canonical form: the maps go to `a`, the reduced global minimal model (PARI's ellminimalmodel form); the
 // integral model read off the relation is kept in `construction` with the change (u, r, s, t) to `a`.
-import { Degenerate, NinefoldError, NotOnCurve } from '../exact/errors.ts';
+import { Degenerate, NinefoldError, NotExact, NotOnCurve } from '../exact/errors.ts';
 import { content } from '../exact/integer.ts';
 import { gcd } from '../exact/gcd.ts';
 import { matKernel } from '../exact/linalg.ts';
@@ -33,14 +33,18 @@ export interface WeierstrassModel {
   readonly curve: Form;
   readonly base: Point;
   readonly flex: boolean;
-  /** [a1, a2, a3, a4, a6] of the model the maps go to: the reduced global minimal model. */
+  /** [a1, a2, a3, a4, a6] of the model the maps go to: the reduced global minimal model (see `minimal`). */
   readonly a: AInvariants;
   readonly c4: bigint;
   readonly c6: bigint;
   readonly discriminant: bigint;
   readonly j: Rational;
-  /** The same reduced minimal model (kept as its own field: the CLI contract names both). */
-  readonly minimal: AInvariants;
+  /**
+   * The same reduced minimal model (its own field: the CLI contract names both); null when gcd(c4, c6)
+   * could not be factored, and then `a` is the construction model and `minimalNote` says why.
+   */
+  readonly minimal: AInvariants | null;
+  readonly minimalNote?: string;
   /** Short form y² = x³ + A·x + B with A = −27c4, B = −54c6 (Silverman, AEC III.1). */
   readonly short: { readonly A: bigint; readonly B: bigint };
   /** Forms (X, Y, Z) of degree 1 (flex) or 2 with image (X/Z, Y/Z) on `a`; all vanish only at O and O'. */
@@ -148,7 +152,15 @@ export function weierstrassModel(f: Form, o: Point): WeierstrassModel {
   const a: AInvariants = [b, p * e, c * A * e, qq * A * e * e, r * A * A * e * e * e];
   const quant = modelQuantities(a);
   if (quant.discriminant === 0n || quant.j === null) throw new NinefoldError('internal: the model is singular', 'curve');
-  const min = modelMinimal(a);
+  let min: { a: AInvariants; change: CoordinateChange };
+  let minimalNote: string | undefined;
+  try {
+    min = modelMinimal(a);
+  } catch (err) {
+    if (!(err instanceof NotExact)) throw err;
+    minimalNote = err.message;
+    min = { a, change: { u: 1n, r: rat(0n), s: rat(0n), t: rat(0n) } };
+  }
   const mq = modelQuantities(min.a);
   const scale = A * e;
   const raw: [Form, Form, Form] = [formScale(numX, scale), formScale(numY, scale * e), den];
@@ -161,7 +173,8 @@ export function weierstrassModel(f: Form, o: Point): WeierstrassModel {
     c6: mq.c6,
     discriminant: mq.discriminant,
     j: mq.j!,
-    minimal: min.a,
+    minimal: minimalNote === undefined ? min.a : null,
+    ...(minimalNote === undefined ? {} : { minimalNote }),
     short: { A: -27n * mq.c4, B: -54n * mq.c6 },
     forward: formsChange(raw, min.change),
     lines: flex ? { tangent, xLine, yLine } : { tangent, xLine, yLine, second: o2, secondTangent },

@@ -37,6 +37,7 @@ export const weierstrass: Verb = {
       discriminant: model.discriminant,
       j: ratToString(model.j),
       minimal: model.minimal,
+      ...(model.minimalNote ? { minimalNote: model.minimalNote } : {}),
       short: { equation: `y^2 = x^3 + (${model.short.A})x + (${model.short.B})`, A: model.short.A, B: model.short.B },
       forward: model.forward.map((h) => formToText(h)),
       inverse,
