@@ -116,6 +116,14 @@ describe('smooth and degenerate input', () => {
     const s = cubicSingularPoints(F('y^2 + 3xy = x^3 - 7x + 11'));
     expect([s.smooth, s.points.length, s.tjurinaTotal]).toEqual([true, 0, 0]);
   });
+  it('curves with a repeated component are reported as not reduced (singular along a curve), lines named', () => {
+    const conic2 = formSingularPoints(F('(x^2 + y^2 - 1)^2 = 0'));
+    expect([conic2.smooth, conic2.reduced, conic2.tjurinaTotal]).toEqual([false, false, null]);
+    const lines = formSingularPoints(F('x^2 y^2 (x + y - 1) = 0'));
+    expect(lines.reduced).toBe(false);
+    expect(lines.repeatedLines.map((l) => [l.line.join(':'), l.multiplicity])).toEqual([['1:0:0', 2], ['0:1:0', 2]]);
+    expect(formSingularPoints(F('y = 3x + 1')).smooth).toBe(true);
+  });
   it('refuses a curve that is not a cubic, saying so', () => {
     expect(() => cubicSingularPoints(F('x^2 + y^2 = 5'))).toThrow(InvalidInput);
   });
