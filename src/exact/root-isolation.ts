@@ -2,8 +2,9 @@
 //
 // Canonical form of the answer: the distinct real roots in increasing order, each as {lo, hi} with exact
 // rational ends. lo == hi when the root is exactly that rational (met on the bisection grid); otherwise the
-// root lies strictly inside (lo, hi), it is the only root of p in [lo, hi], p(lo) and p(hi) are non-zero
-// with opposite signs. Intervals may share an end point, never a root.
+// root lies strictly inside (lo, hi), it is the only root of p in [lo, hi], and the square-free part of p
+// is non-zero at lo and hi with opposite signs (p itself too when the root is simple). Intervals may share
+// an end point, never a root.
 //
 // Method: Descartes' rule of signs with bisection, the Vincent–Collins–Akritas algorithm in its
 // (0,1)-bisection form (Collins & Akritas, "Polynomial real root isolation using Descartes' rule of signs",
