@@ -11,11 +11,14 @@
 //                    (F(λP + μD) = μ(λ D·∇F(P) + μ F(D)) when F(P) = 0); on a cubic, a random chord-and-
 //                    tangent walk from the rational points of it the construction already holds
 //                    (Silverman–Tate, ch. I: P*Q is rational when P, Q are). Where none can be made
-//                    (no known rational point, degree > 3) the point keeps its place, and the report says so.
+//                    (no known rational point, degree > 3) it becomes the real algebraic point of the
+//                    curve over a random rational abscissa near its own; checks on it are then decided
+//                    only as the evaluator can on algebraic data (often 'undecided'), and the report says so.
 // An instance where some object cannot be built (two random points fell together) is drawn again, up to
 // a limit; checks of an instance that stays degenerate are counted as `degenerate`, never as held.
 import { Degenerate, NinefoldError } from '../exact/errors.ts';
 import { bitLength } from '../exact/integer.ts';
+import { rat, ratAdd, ratParse, ratToString } from '../exact/rational.ts';
 import { formEval, formGradientAt, type Form } from '../poly/form.ts';
 import { cross, dot, triple, tripleIsZero, type Point } from '../plane/point.ts';
 import { pointParse, pointToString } from '../plane/parse-point.ts';
@@ -56,14 +59,20 @@ export interface TrialCheckReport {
   readonly firstFailure: TrialFailure | null;
 }
 
-export type RedrawWay = 'random rational point' | 'random parameter' | 'random rational point of the curve' | 'kept in place';
+export type RedrawWay =
+  | 'random rational point'
+  | 'random parameter'
+  | 'random rational point of the curve'
+  | 'random real algebraic point of the curve'
+  | 'kept in place';
 
 export interface TrialReport {
   readonly seed: number;
   readonly requested: number;
   readonly completed: number;
   readonly cancelled: boolean;
-  /** How each free point was re-drawn (by id); 'kept in place' when no random exact point could be made. */
+  /** How each free point was re-drawn (by id); 'kept in place' when no random exact point could be made
+   * (a curve that is not exact in that instance). */
   readonly redrawn: Readonly<Record<ObjectId, RedrawWay>>;
   readonly checks: readonly TrialCheckReport[];
 }
@@ -149,11 +158,40 @@ function instanceDraw(
       if (p) {
         at = pointToString(p);
         redrawn[o.id] ??= 'random rational point of the curve';
+      } else if (f) {
+        // No rational point can be made: the real point of the curve over a random rational abscissa
+        // near the saved one, an exact real algebraic point (src/construct/on-curve.ts).
+        objects.push({ ...o, construction: { ...c, params: algebraicPlace(c.params, rand, height) } });
+        redrawn[o.id] = 'random real algebraic point of the curve';
+        continue;
       } else redrawn[o.id] = 'kept in place';
     }
     objects.push(at === null ? o : { ...o, construction: { ...c, params: { ...c.params, at } } });
   }
   return { ...doc, objects };
+}
+
+/** Params {x, near} for a point on a curve: x the saved abscissa moved by a random rational in [-1, 1]. */
+function algebraicPlace(params: Readonly<Record<string, string>>, rand: () => number, height: number): Record<string, string> {
+  let x0 = rat(0n);
+  let y0 = rat(0n);
+  try {
+    if (params.at !== undefined) {
+      const p = pointParse(params.at);
+      if (p[2] !== 0n) {
+        x0 = rat(p[0], p[2]);
+        y0 = rat(p[1], p[2]);
+      }
+    } else if (params.x !== undefined) {
+      x0 = ratParse(params.x);
+      y0 = ratParse(params.near ?? '0');
+    }
+  } catch {
+    // an unreadable saved place: start from the origin
+  }
+  const d = BigInt(1 + Math.floor(rand() * height));
+  const n = BigInt(Math.floor(rand() * (2 * Number(d) + 1))) - d;
+  return { x: ratToString(ratAdd(x0, rat(n, d))), near: ratToString(y0) };
 }
 
 /** The known rational points of a curve in the construction (its points' saved places that lie on it). */

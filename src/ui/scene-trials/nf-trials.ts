@@ -107,8 +107,14 @@ export class NfTrials extends LitElement {
     this.phase = 'done';
     this.done = report.completed;
     this.checks = report.checks;
-    const kept = Object.values(report.redrawn).filter((w) => w === 'kept in place').length;
-    this.note = `${report.completed} random instances (seed ${report.seed}).${kept ? ` ${kept} point${kept === 1 ? '' : 's'} on curves with no known rational point kept ${kept === 1 ? 'its place' : 'their places'}.` : ''}`;
+    const ways = Object.values(report.redrawn);
+    const alg = ways.filter((w) => w === 'random real algebraic point of the curve').length;
+    const kept = ways.filter((w) => w === 'kept in place').length;
+    const plural = (n: number) => `${n} point${n === 1 ? '' : 's'}`;
+    this.note =
+      `${report.completed} random instances (seed ${report.seed}).` +
+      (alg ? ` ${plural(alg)} on curves with no known rational point became real algebraic points (checks on them may stay undecided).` : '') +
+      (kept ? ` ${plural(kept)} on curves that are not exact kept ${kept === 1 ? 'its place' : 'their places'}.` : '');
   }
 
   private counterexample(c: TrialCheckReport): Scene | null {

@@ -109,15 +109,18 @@ describe('theorem trials', () => {
     expect(cubicPool.length).toBeGreaterThan(10);
   });
 
-  it('a curve with no known rational point keeps its points in place and says so', () => {
+  it('a point on a curve with no known rational point becomes a random real algebraic point of it', () => {
     let doc = constructionEmpty();
     const c = constructionAdd(doc, { construction: { kind: 'curve-equation', parents: [], params: { equation: 'x^3 + 2y^3 = 7x + 1' } } });
-    doc = c.doc;
-    // no point-on-curve seeds: add a free point and a check that does not involve the curve
-    const p = constructionAdd(doc, { construction: { kind: 'point-free', parents: [], params: { at: '1:1:1' } } });
-    doc = constructionAdd(p.doc, { construction: { kind: 'check-equal', parents: [p.id, p.id], params: {} } }).doc;
-    const r = constructionTrials(doc, { count: 3 });
-    expect(r.checks[0].held).toBe(3);
+    // (1, y) with 2y^3 = 7: an irrational real point, the only kind of seed this curve offers here.
+    const p = constructionAdd(c.doc, { construction: { kind: 'point-on-curve', parents: [c.id], params: { x: '1', near: '1' } }, label: 'P' });
+    doc = constructionAdd(p.doc, { construction: { kind: 'check-on-curve', parents: [p.id, c.id], params: {} }, label: 'P on the curve' }).doc;
+    const r = constructionTrials(doc, { count: 6, seed: 4 });
+    expect(r.redrawn[p.id]).toBe('random real algebraic point of the curve');
+    const t = r.checks[0];
+    expect(t.failed).toBe(0);
+    expect(t.held + t.undecided + t.degenerate).toBe(6);
+    expect(t.held + t.undecided).toBeGreaterThan(0);
     expect(curvePointRandom(formParse('x^3 + 2y^3 = 7x + 1').form, [], seededUniform(1), 12)).toBeNull();
   });
 });
