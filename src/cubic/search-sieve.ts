@@ -6,7 +6,10 @@
 // with max(|X|, |Y|, |Z|) <= H; fixing its sign by Z > 0, or Z = 0 and X > 0, or (0:1:0), its (X, Z) is
 // one of the pairs visited and Y is an integer root of the polynomial F(X, y, Z) in [-H, H]. When that
 // polynomial vanishes identically the line through (0:1:0) and (X:0:Z) is a component and every
-// admissible Y is listed. Cost: about 2·H² pairs, each O(log H) evaluations of a cubic.
+// admissible Y is listed. Cost: about 2·H² pairs; most are discarded by a table lookup modulo a few small
+// primes (an integer root y is a root modulo every prime, so a pair whose polynomial has no root mod l
+// has none at all — a necessary condition only, so nothing is lost), the rest cost O(log H) exact
+// evaluations of a cubic.
 import { Cancelled } from '../exact/errors.ts';
 import { gcd } from '../exact/gcd.ts';
 import { ratCmp, type Rational } from '../exact/rational.ts';
@@ -58,6 +61,34 @@ export function regionContains(region: SearchRegion | undefined, p: Point): bool
   return ratCmp(region.xmin, xr) <= 0 && ratCmp(xr, region.xmax) <= 0 && ratCmp(region.ymin, yr) <= 0 && ratCmp(yr, region.ymax) <= 0;
 }
 
+// Building a table costs l³ evaluations; primes to 31 cost about 80,000 in all and leave about 2^-11 of
+// the pairs of a Weierstrass cubic (a binary quadratic in y has a root mod l about half of the time).
+const FILTER_PRIMES = [3, 5, 7, 11, 13, 17, 19, 23, 29, 31];
+
+/** For each prime l: ok[(X mod l)·l + (Z mod l)] = 1 when F(X, y, Z) ≡ 0 (mod l) has a root y. */
+function residueTables(f: Form): { l: number; ok: Uint8Array }[] {
+  const mons = monomials(f.degree);
+  return FILTER_PRIMES.map((l) => {
+    const L = BigInt(l);
+    const c = f.coeffs.map((v) => Number(((v % L) + L) % L));
+    const pw: number[][] = [];
+    for (let b = 0; b < l; b++) pw.push([1, b % l, (b * b) % l, (b * b * b) % l]);
+    const ok = new Uint8Array(l * l);
+    for (let x = 0; x < l; x++) {
+      for (let z = 0; z < l; z++) {
+        const p = [0, 0, 0, 0];
+        for (let k = 0; k < mons.length; k++) {
+          if (c[k] !== 0) p[mons[k][1]] = (p[mons[k][1]] + c[k] * pw[x][mons[k][0]] * pw[z][mons[k][2]]) % l;
+        }
+        let has = 0;
+        for (let y = 0; y < l && !has; y++) if ((((p[3] * y + p[2]) % l) * y % l * y + p[1] * y + p[0]) % l === 0) has = 1;
+        ok[x * l + z] = has;
+      }
+    }
+    return { l, ok };
+  });
+}
+
 /**
  * Every point of height <= h on the curve F = 0 (degree 1..3, not the zero form) inside the region,
  * unsorted and without repeats.
@@ -72,6 +103,7 @@ export function sievePoints(f: Form, h: bigint, options: SieveOptions = {}): Poi
   const poll = (): void => {
     if (options.isCancelled && options.isCancelled()) throw new Cancelled('rational point search');
   };
+  const tables = residueTables(f);
   // (0:1:0), the one point with X = Z = 0.
   if (!region && h >= 1n && f.coeffs[indexOfY(f)] === 0n) out.push([0n, 1n, 0n]);
   for (let z = zMin; z <= h; z++) {
@@ -87,8 +119,20 @@ export function sievePoints(f: Form, h: bigint, options: SieveOptions = {}): Poi
       [ylo, yhi] = boxRange(region.ymin, region.ymax, z, h);
     }
     if (ylo > yhi) continue;
+    const zn = Number(z);
+    const zres = tables.map((t) => zn % t.l); // z >= 0
     for (let x = xlo; x <= xhi; x++) {
       if (++polled % 2000 === 0) poll();
+      const xn = Number(x);
+      let possible = true;
+      for (let i = 0; i < tables.length; i++) {
+        const t = tables[i];
+        if (!t.ok[(((xn % t.l) + t.l) % t.l) * t.l + zres[i]]) {
+          possible = false;
+          break;
+        }
+      }
+      if (!possible) continue;
       const g = gcd(x, z);
       if (g === 0n) continue;
       const p = [0n, 0n, 0n, 0n];

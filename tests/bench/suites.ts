@@ -3,9 +3,10 @@ import type { BenchSuite } from './bench.ts';
 import { formsBench } from './forms.bench.ts';
 import { gcdBench, rootsBench } from './roots.bench.ts';
 import { nineBench } from './nine.bench.ts';
+import { pointsBench } from './points.bench.ts';
 import { curveBench } from './curve.bench.ts';
 import { traceBench } from './trace.bench.ts';
 import { scenesBench } from './scenes.bench.ts';
 import { groupBench } from './group.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, curveBench, traceBench, scenesBench, groupBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, pointsBench, curveBench, traceBench, scenesBench, groupBench];
