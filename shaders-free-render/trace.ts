@@ -16,7 +16,7 @@ import {
 } from './frame.ts';
 import { fpolyRealRoots } from './upoly-float.ts';
 import { piecesAssemble, type Fragment, type Junction } from './assemble.ts';
-import type { BranchEnd } from './display-list.ts';
+import type { BranchEnd, DisplayItem } from './display-list.ts';
 
 /** A world rectangle drawn into width x height CSS pixels at a device-pixel ratio. */
 export interface TraceView {
@@ -354,4 +354,12 @@ function gapFill(fv: FollowView, run: number[], u: number, v: number, depth: num
   gapFill(fv, run, mu, mv, depth + 1);
   run.push(mu, mv);
   gapFill(fv, run, u, v, depth + 1);
+}
+
+/** The trace as display-list items in one style (closed pieces keep their repeated first vertex). */
+export function curveTraceItems(tr: CurveTrace, style = 'curve', owner?: string): DisplayItem[] {
+  const items: DisplayItem[] = [];
+  for (const p of tr.polylines) items.push({ kind: 'polyline', points: p.points, closed: p.closed, ends: p.ends, style, owner });
+  for (const [x, y] of tr.dots) items.push({ kind: 'dot', x, y, role: 'isolated', style, owner });
+  return items;
 }
