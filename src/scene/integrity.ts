@@ -80,10 +80,10 @@ function paramsCheck(o: SceneObject, i: number): void {
     if (!p.at.includes(':')) throw new ParseError(`expected "X:Y:Z", found "${p.at}"`, 1, where('at'));
     pointParse(p.at, where('at'));
   }
-  if (o.kind === 'point-on-curve' && p.at === undefined && (p.x === undefined || p.near === undefined)) {
-    throw new InvalidInput('a point on a curve needs "at", or both "x" and "near"', at(['objects', i, 'params']));
+  if (o.kind === 'point-on-curve' && p.at === undefined && ((p.x === undefined && p.y === undefined) || p.near === undefined)) {
+    throw new InvalidInput('a point on a curve needs "at", or "x" (or "y") with "near"', at(['objects', i, 'params']));
   }
-  for (const name of ['x', 'near'] as const) if (p[name] !== undefined) ratParse(p[name], where(name));
+  for (const name of ['x', 'y', 'near'] as const) if (p[name] !== undefined) ratParse(p[name], where(name));
   for (const name of ['index', 'n'] as const) {
     if (p[name] !== undefined && !/^-?\d{1,12}$/.test(p[name])) throw new InvalidInput(`expected an integer, found "${p[name]}"`, where(name));
   }
