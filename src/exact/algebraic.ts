@@ -157,6 +157,7 @@ export function algebraicToNumber(a: RealAlgebraic): number {
     if (isExact(x)) return ratToNumber(x.lo);
     const lo = ratToNumber(x.lo);
     const hi = ratToNumber(x.hi);
+    if (lo === hi) return lo; // includes ±Infinity beyond the double range and 0 below it
     if (Math.sign(lo) === Math.sign(hi) && Math.abs(hi - lo) <= Math.min(Math.abs(lo), Math.abs(hi)) * 2 ** -60) return (lo + hi) / 2;
     if (bits > 4200) return (lo + hi) / 2; // below the double range: every point of the interval rounds alike
   }

@@ -72,6 +72,11 @@ describe('real algebraic numbers', () => {
     const tiny = algebraicRealRoots([-1n, 0n, 10n ** 401n]).at(-1)!;
     expect(algebraicToDecimal(tiny, 6)).toBe('3.16228e-201');
   });
+  it('doubles beyond range: ±Infinity above, 0 below', () => {
+    expect(algebraicToNumber(algebraicRealRoots([-(10n ** 801n), 0n, 1n]).at(-1)!)).toBe(Infinity);
+    expect(algebraicToNumber(algebraicRealRoots([-(10n ** 801n), 0n, 1n])[0])).toBe(-Infinity);
+    expect(algebraicToNumber(algebraicRealRoots([-1n, 0n, 10n ** 801n]).at(-1)!)).toBe(0);
+  });
   it('refuses bad input', () => {
     expect(() => algebraicFromInterval([-2n, 0n, 1n], rat(2n), rat(3n))).toThrow(InvalidInput);
     expect(() => algebraicRealRoots([])).toThrow(InvalidInput);
