@@ -14,7 +14,7 @@ import { sceneParse } from '../../src/scene/load.ts';
 import type { Scene } from '../../src/scene/scene.ts';
 import { sceneFigureInput } from '../../src/export/scene-figure.ts';
 import { figureToSvg } from '../../src/export/svg.ts';
-import { figureToTikzStandalone } from '../../src/export/tikz.ts';
+import { figureToTikzSnippet, figureToTikzStandalone } from '../../src/export/tikz.ts';
 import { svgToPng } from '../../src/export/png.ts';
 import { pageFrame, type FigureInput } from '../../src/export/figure.ts';
 import { constructionAdd } from '../../src/construct/graph.ts';
@@ -213,5 +213,21 @@ describe('hostile labels in figures', () => {
     execFileSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', '-no-shell-escape', `-output-directory=${dir}`, tex], { cwd: dir, stdio: 'pipe', timeout: 120_000 });
     const text = execFileSync('pdftotext', [join(dir, 'hostile.pdf'), '-'], { encoding: 'utf8' });
     expect(text).toContain('\\input{/etc/passwd}');
+  });
+});
+
+describe('the TikZ snippet', () => {
+  it('compiles when pasted into an article that loads tikz (greyscale print settings)', () => {
+    const scene = scenes.find(([f]) => f === 'ninth-point.json')![1];
+    const snippet = figureToTikzSnippet(sceneFigureInput(scene, { greyscale: true, widthPt: 300, fontSizePt: 8 }));
+    const doc = ['\\documentclass{article}', '\\usepackage{tikz}', '\\begin{document}', 'A figure:', '', snippet, '', '\\end{document}', ''].join('\n');
+    const tex = join(dir, 'paper.tex');
+    writeFileSync(tex, doc);
+    execFileSync('pdflatex', ['-interaction=nonstopmode', '-halt-on-error', '-no-shell-escape', `-output-directory=${dir}`, tex], { cwd: dir, stdio: 'pipe', timeout: 120_000 });
+    execFileSync('pdftoppm', ['-gray', '-r', '40', '-singlefile', join(dir, 'paper.pdf'), join(dir, 'paper')], { stdio: 'pipe', timeout: 60_000 });
+    const px = pgmDark(join(dir, 'paper.pgm'));
+    expect(px.dark / px.total).toBeGreaterThan(0.002);
+    // greyscale: every colour defined in the picture is a grey
+    for (const m of snippet.matchAll(/\\definecolor\{\w+\}\{HTML\}\{([0-9A-F]{6})\}/g)) expect(m[1]).toMatch(/^([0-9A-F]{2})\1\1$/);
   });
 });
