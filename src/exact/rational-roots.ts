@@ -90,7 +90,8 @@ export function ratLastConvergent(n: bigint, d: bigint, bound: bigint): Rational
     if (r === 0n) break;
     [x, y] = [y, r];
   }
-  return rat(p1, q1);
+  // Convergents are already in lowest terms (p_k q_{k-1} − p_{k-1} q_k = ±1) with q >= 1: no gcd needed.
+  return { num: p1, den: q1 };
 }
 
 /** Is u/v a root of f? Cheap necessary conditions first (a root u/v of a primitive f has v | lead, u | f(0)). */
