@@ -21,6 +21,7 @@ export const pointsBench: BenchSuite = {
       formParse(`Y^2 Z + (${a1}) X Y Z + (${a3}) Y Z^2 - X^3 - (${a2}) X^2 Z - (${a4}) X Z^2 - (${a6}) Z^3`).form,
     );
     const figures: BenchFigure[] = [];
+    for (const f of forms) cubicRationalPoints(f, { height: 30 }); // warm-up (JIT)
     for (const h of [100, 300]) {
       const times: number[] = [];
       let found = 0;
