@@ -102,7 +102,8 @@ function relation(f: Form, q: Form[], mult: Form[]): bigint[] {
 export function weierstrassModel(f: Form, o: Point): WeierstrassModel {
   cubicRequire(f);
   cubicRequireSmoothPoint(f, o, 'base');
-  if (cubicInvariants(f).discriminant.num === 0n) {
+  const inv = cubicInvariants(f);
+  if (inv.discriminant.num === 0n) {
     throw new Degenerate('the curve is singular, so it has no Weierstrass model (parametrise it instead)', 'curve');
   }
   const g = cubicGradientAt(f, o);
@@ -155,7 +156,8 @@ export function weierstrassModel(f: Form, o: Point): WeierstrassModel {
   let min: { a: AInvariants; change: CoordinateChange };
   let minimalNote: string | undefined;
   try {
-    min = modelMinimal(a);
+    // The cubic's own c4, c6 (ARVT) are far smaller than the construction model's: factor those.
+    min = modelMinimal(a, inv.c4.den === 1n && inv.c6.den === 1n ? { c4: inv.c4.num, c6: inv.c6.num } : undefined);
   } catch (err) {
     if (!(err instanceof NotExact)) throw err;
     minimalNote = err.message;

@@ -9,6 +9,7 @@ import { groupAdd, groupMultiple, groupNegate } from '../../../src/cubic/group.t
 import { cubicInvariants } from '../../../src/cubic/invariants.ts';
 import { modelAdd, modelContains, modelMultiple, modelNegate, modelQuantities } from '../../../src/cubic/curve-model.ts';
 import { cubicIsFlex, cubicTangentialPoint } from '../../../src/cubic/chord.ts';
+import { modelMinimal } from '../../../src/cubic/minimal-model.ts';
 import { formTransform } from '../../../src/poly/transform.ts';
 import { formParse } from '../../../src/poly/parse.ts';
 import { Degenerate, NotOnCurve } from '../../../src/exact/errors.ts';
@@ -36,6 +37,9 @@ describe('weierstrassModel', () => {
       const o2 = cubicTangentialPoint(f, o);
       expect(weierstrassMap(m, o2), info).toEqual(modelAdd(m.a, weierstrassMap(m, groupAdd(f, o, o2, p)), modelNegate(m.a, fp)));
       expect(weierstrassInverse(m, weierstrassMap(m, o2)), info).toEqual(o2);
+      // The minimal model found through the cubic's small ARVT pair equals the one found by factoring
+      // the construction model's own gcd(c4, c6).
+      if (k < 8) expect(modelMinimal(m.construction.a).a, info).toEqual(m.minimal);
     }
   });
 
