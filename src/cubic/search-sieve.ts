@@ -10,7 +10,7 @@
 // primes (an integer root y is a root modulo every prime, so a pair whose polynomial has no root mod l
 // has none at all — a necessary condition only, so nothing is lost), the rest cost O(log H) exact
 // evaluations of a cubic.
-import { Cancelled } from '../exact/errors.ts';
+import { Cancelled, InvalidInput } from '../exact/errors.ts';
 import { gcd } from '../exact/gcd.ts';
 import { ratCmp, type Rational } from '../exact/rational.ts';
 import { monomials, type Form } from '../poly/form.ts';
@@ -63,6 +63,9 @@ export function regionContains(region: SearchRegion | undefined, p: Point): bool
 
 // Building a table costs l³ evaluations; primes to 31 cost about 80,000 in all and leave about 2^-11 of
 // the pairs of a Weierstrass cubic (a binary quadratic in y has a root mod l about half of the time).
+/** Far beyond any height the sieve can finish (2·H² pairs), and small enough for exact double loop counters. */
+export const MAX_SIEVE_HEIGHT = 10_000_000n;
+
 const FILTER_PRIMES = [3, 5, 7, 11, 13, 17, 19, 23, 29, 31];
 
 /** For each prime l: ok[(X mod l)·l + (Z mod l)] = 1 when F(X, y, Z) ≡ 0 (mod l) has a root y. */
@@ -94,6 +97,7 @@ function residueTables(f: Form): { l: number; ok: Uint8Array }[] {
  * unsorted and without repeats.
  */
 export function sievePoints(f: Form, h: bigint, options: SieveOptions = {}): Point[] {
+  if (h > MAX_SIEVE_HEIGHT) throw new InvalidInput(`the sieve goes to height ${MAX_SIEVE_HEIGHT} at most, asked for ${h}`, 'height');
   const region = options.region;
   const mons = monomials(f.degree);
   const out: Point[] = [];
@@ -121,9 +125,10 @@ export function sievePoints(f: Form, h: bigint, options: SieveOptions = {}): Poi
     if (ylo > yhi) continue;
     const zn = Number(z);
     const zres = tables.map((t) => zn % t.l); // z >= 0
-    for (let x = xlo; x <= xhi; x++) {
+    // The pair loop runs on doubles (|x| <= h <= MAX_SIEVE_HEIGHT is exact) and makes BigInts for survivors only.
+    const xhiN = Number(xhi);
+    for (let xn = Number(xlo); xn <= xhiN; xn++) {
       if (++polled % 2000 === 0) poll();
-      const xn = Number(x);
       let possible = true;
       for (let i = 0; i < tables.length; i++) {
         const t = tables[i];
@@ -133,6 +138,7 @@ export function sievePoints(f: Form, h: bigint, options: SieveOptions = {}): Poi
         }
       }
       if (!possible) continue;
+      const x = BigInt(xn);
       const g = gcd(x, z);
       if (g === 0n) continue;
       const p = [0n, 0n, 0n, 0n];
