@@ -27,7 +27,7 @@ export const weierstrass: Verb = {
     const lineText = (t: readonly bigint[]) => formToText({ degree: 1, coeffs: t }) + ' = 0';
     const inverse = model.flex
       ? 'O is a flex, so the forward map is a linear change of coordinates; the inverse is its inverse matrix (the point at infinity goes back to O).'
-      : `O is not a flex; O' = ${pointToString(l.second!)} is the third point of the tangent at O. The x-coordinate is a parameter of the lines through O' (the pencil spanned by ${lineText(l.xLine)} and the tangent ${lineText(l.tangent)}): a model point (x, y) goes back to the point of the cubic on the line of its x, other than O' unless (x, y) is the image of O', whose image is (x, y); the point at infinity goes back to O.`;
+      : `O is not a flex; O' = ${pointToString(l.second!)} is the third point of the tangent ${lineText(l.tangent)} at O. A model point (x, y) goes back by a construction: x picks a line through O' in the pencil spanned by ${lineText(l.xLine)} and that tangent; on this line y = T'·M/T² (T' = ${lineText(l.secondTangent!)}, M = ${lineText(l.yLine)}) is linear in the position, which picks the point. The point at infinity goes back to O.`;
     return {
       base: pointToString(o),
       flex: model.flex,
