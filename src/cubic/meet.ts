@@ -86,11 +86,6 @@ function lineSpan(l: Line): [Point, Point] {
   throw new NinefoldError('internal: a non-zero line has two independent points');
 }
 
-/** α as a double, refined first so that the double is as good as it can be. */
-function alphaNumber(a: RealAlgebraic): number {
-  return algebraicToNumber(a);
-}
-
 function numberTriple(p: readonly bigint[]): [number, number, number] {
   const big = p.reduce((m, x) => (x < 0n ? (-x > m ? -x : m) : x > m ? x : m), 0n);
   const shift = big.toString(2).length > 1000 ? big.toString(2).length - 60 : 0;
@@ -132,7 +127,7 @@ export function lineCurveMeet(f: Form, l: Line): MeetResult {
       const [s, t] = r.point;
       points.push(exactPoint(triple(s * p[0] + t * q[0], s * p[1] + t * q[1], s * p[2] + t * q[2]), r.multiplicity));
     } else if (r.real) {
-      const a = alphaNumber(r.real);
+      const a = algebraicToNumber(r.real);
       points.push({
         point: null,
         real: true,
@@ -214,7 +209,7 @@ function meetInFrame(f: Form, g: Form, m: Matrix3): Trial | null {
       const alpha = r.real;
       const q = upolyGcd(alpha.poly, s11);
       if (rootOfFactor(alpha, q)) return { points, ok: false };
-      const a = alphaNumber(alpha);
+      const a = algebraicToNumber(alpha);
       const [n10, n11] = scaledPair(s10, s11);
       const y = -realEval(n10, a) / realEval(n11, a);
       const approx = realTripleNormalise([0, 1, 2].map((k) => Number(m[k][0]) * a + Number(m[k][1]) * y + Number(m[k][2])));
