@@ -65,7 +65,7 @@ print(W.j == ellinit(ellfromeqn(${c})).j);`);
     expect(out[3]).toBe('1');
     // and our own check in the scene agrees
     const v = constructionEvaluate(s.doc);
-    const check = s.doc.objects.find((o) => o.label === 'W(P) + W(Q) = W(P+Q)')!;
+    const check = s.doc.objects.find((o) => o.label === 'W(P) + W(Q) = W(P+Q) for these P, Q')!;
     expect(v.get(check.id)).toMatchObject({ verdict: 'holds' });
   });
 
