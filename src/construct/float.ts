@@ -182,34 +182,59 @@ function lineSpan(l: F3): [F3, F3] {
   return [c[2].v, f3Cross(l, c[2].v)];
 }
 
-/** Real roots of a polynomial (coefficient of u^i at index i) by Durand–Kerner, then one Newton polish. */
+/** Real roots of a polynomial (coefficient of u^i at index i) by Durand–Kerner, then one Newton polish.
+ * Works in place on typed arrays: it runs for every meet point on every pointer move of a drag. */
 export function polyRealRoots(poly: readonly number[]): number[] {
   const n = poly.length - 1;
   if (n < 1) return [];
   const lead = poly[n];
-  const a = poly.map((c) => c / lead);
-  const bound = 1 + Math.max(...a.slice(0, n).map(Math.abs));
+  const a = new Float64Array(n + 1);
+  let bound = 1;
+  for (let k = 0; k <= n; k++) a[k] = poly[k] / lead;
+  for (let k = 0; k < n; k++) bound = Math.max(bound, 1 + Math.abs(a[k]));
+  const re = new Float64Array(n);
+  const im = new Float64Array(n);
   // Start on a circle, off any symmetry axis (the usual Durand–Kerner start).
-  let z = Array.from({ length: n }, (_, k) => ({ re: 0.5 * bound * Math.cos(0.4 + (2 * Math.PI * k) / n), im: 0.5 * bound * Math.sin(0.4 + (2 * Math.PI * k) / n) }));
+  for (let k = 0; k < n; k++) {
+    re[k] = 0.5 * bound * Math.cos(0.4 + (2 * Math.PI * k) / n);
+    im[k] = 0.5 * bound * Math.sin(0.4 + (2 * Math.PI * k) / n);
+  }
   for (let it = 0; it < 200; it++) {
     let moved = 0;
-    z = z.map((zi, i) => {
-      let num = { re: a[n], im: 0 }; // p(zi) by Horner in complex arithmetic
-      for (let k = n - 1; k >= 0; k--) num = { re: num.re * zi.re - num.im * zi.im + a[k], im: num.re * zi.im + num.im * zi.re };
-      let den = { re: 1, im: 0 };
-      z.forEach((zj, j) => {
-        if (j === i) return;
-        const d = { re: zi.re - zj.re, im: zi.im - zj.im };
-        den = { re: den.re * d.re - den.im * d.im, im: den.re * d.im + den.im * d.re };
-      });
-      const dd = den.re * den.re + den.im * den.im || 1e-300;
-      const q = { re: (num.re * den.re + num.im * den.im) / dd, im: (num.im * den.re - num.re * den.im) / dd };
-      moved = Math.max(moved, Math.hypot(q.re, q.im));
-      return { re: zi.re - q.re, im: zi.im - q.im };
-    });
+    for (let i = 0; i < n; i++) {
+      const zr = re[i];
+      const zi = im[i];
+      let pr = a[n];
+      let pi = 0;
+      for (let k = n - 1; k >= 0; k--) {
+        const t = pr * zr - pi * zi + a[k];
+        pi = pr * zi + pi * zr;
+        pr = t;
+      }
+      let dr = 1;
+      let di = 0;
+      for (let j = 0; j < n; j++) {
+        if (j === i) continue;
+        const xr = zr - re[j];
+        const xi = zi - im[j];
+        const t = dr * xr - di * xi;
+        di = dr * xi + di * xr;
+        dr = t;
+      }
+      const dd = dr * dr + di * di || 1e-300;
+      const qr = (pr * dr + pi * di) / dd;
+      const qi = (pi * dr - pr * di) / dd;
+      re[i] = zr - qr;
+      im[i] = zi - qi;
+      moved = Math.max(moved, Math.abs(qr) + Math.abs(qi));
+    }
     if (moved < 1e-14 * bound) break;
   }
-  return z.filter((w) => Math.abs(w.im) <= 1e-7 * Math.max(1, Math.hypot(w.re, w.im))).map((w) => newtonPolish(poly, w.re));
+  const out: number[] = [];
+  for (let k = 0; k < n; k++) {
+    if (Math.abs(im[k]) <= 1e-7 * Math.max(1, Math.hypot(re[k], im[k]))) out.push(newtonPolish(poly, re[k]));
+  }
+  return out;
 }
 
 function newtonPolish(poly: readonly number[], x: number): number {

@@ -159,6 +159,11 @@ function placement(value: CurveValue, x: number, y: number, scale: number): Reco
   return curvePlace(value.form!, x, y, 6 / scale, slope).params;
 }
 
+/** Is a drag or a pan in progress? (The canvas then redraws at once on each move, not at the next frame.) */
+export function canvasGestureActive(): boolean {
+  return gesture.kind === 'drag' || gesture.kind === 'pan';
+}
+
 export function canvasPointerMove(sx: number, sy: number): void {
   const view = $view.get();
   const [x, y] = screenToWorld(view, sx, sy);

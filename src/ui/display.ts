@@ -9,7 +9,7 @@ import { curvePrepare, curveTrace, type PreparedCurve } from '../../shaders-free
 import type { ConstructionDoc, CurveValue, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
 import type { Form } from '../poly/form.ts';
 import { curveLandmarks } from '../poly/curve-landmarks.ts';
-import type { BlowupView, View } from './stores/interaction.ts';
+import { worldToScreen, type BlowupView, type View } from './stores/interaction.ts';
 
 export interface DisplayExtras {
   readonly selection: ReadonlySet<ObjectId>;
@@ -128,7 +128,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
       }
       const width = (o.style.width ?? 2) + (highlighted ? 1.5 : 0) + (hovered ? 1 : 0);
       const dash = v.status === 'exact' ? dashOf(o.style.stroke) : [7, 5];
-      const key = `curve:${o.id}`;
+      const key = `curve:${o.style.colour}:${width}:${dash.join(',')}`;
       styles[key] = style(o.style.colour, width, o.style.colour, 2.5, dash);
       if (highlighted) styles[`${key}:halo`] = style(HALO_SELECT, width + 5, HALO_SELECT, 4);
       for (const pl of trace.polylines) {
@@ -146,7 +146,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
       if (!seg) continue;
       const width = (o.style.width ?? 1.25) + (highlighted ? 1.5 : 0) + (hovered ? 1 : 0);
       const dash = v.status === 'exact' ? dashOf(o.style.stroke) : v.status === 'algebraic' ? [2, 3] : [7, 5];
-      const key = `line:${o.id}`;
+      const key = `line:${o.style.colour}:${width}:${dash.join(',')}`;
       styles[key] = style(o.style.colour, width, o.style.colour, 0, dash);
       if (highlighted) {
         styles[`${key}:halo`] = style(HALO_SELECT, width + 5, HALO_SELECT, 0);
@@ -177,7 +177,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
             ? style(o.style.colour, 2, 'none', r)
             : style(o.style.colour, 1.75, 'none', r + 0.5, [2.5, 2]);
       pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
-      if (o.style.showLabel) labelItems.push({ kind: 'label', x: a.x + 7 * px, y: a.y + 7 * px, text: o.label, style: labelStyle(styles, '#1e1c18') });
+      if (o.style.showLabel) labelItems.push({ kind: 'label', x: a.x + 7 * px, y: a.y + 7 * px, text: o.label, style: labelStyle(styles, '#1e1c18'), owner: o.id });
     }
   }
   if (extras.blowup) {
@@ -204,7 +204,29 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     styles.found = style('#5d4a8a', 1, '#5d4a8a', 2.5);
     for (const p of extras.found) if (p.finite) pointItems.push({ kind: 'dot', x: p.x, y: p.y, role: 'point', style: 'found' });
   }
-  return { items: [...items, ...lineOnTop, ...pointItems, ...labelItems], styles };
+  return { items: [...items, ...lineOnTop, ...pointItems, ...declutter(labelItems, view, extras.selection)], styles };
+}
+
+/**
+ * Labels that would overlap one already placed are left out (selected objects' labels first), so text
+ * stays readable however crowded the view: a grid of 12-pixel cells, each label claiming the cells of
+ * its box.
+ */
+function declutter(labels: DisplayItem[], view: View, selection: ReadonlySet<ObjectId>): DisplayItem[] {
+  const taken = new Set<string>();
+  const out: DisplayItem[] = [];
+  const ordered = [...labels].sort((a, b) => Number(selection.has(b.owner ?? '')) - Number(selection.has(a.owner ?? '')));
+  for (const item of ordered) {
+    if (item.kind !== 'label') continue;
+    const [sx, sy] = worldToScreen(view, item.x, item.y);
+    const w = 8 * item.text.length + 4;
+    const cells: string[] = [];
+    for (let cx = Math.floor(sx / 12); cx <= Math.floor((sx + w) / 12); cx++) for (let cy = Math.floor((sy - 16) / 12); cy <= Math.floor(sy / 12); cy++) cells.push(`${cx},${cy}`);
+    if (cells.some((c) => taken.has(c))) continue;
+    for (const c of cells) taken.add(c);
+    out.push(item);
+  }
+  return out;
 }
 
 /** Faint axes with a tick at each unit step that leaves at least 40 pixels between ticks. */

@@ -1,13 +1,13 @@
 // The page's single wiring point: restore the open construction, keep it saved, mount the app, and expose
 // a small hook for the browser tests (window.__ninefold).
-import { constructionEmpty, constructionObject } from '../construct/graph.ts';
+import { constructionEmpty, constructionObject, constructionValidate } from '../construct/graph.ts';
 import type { ObjectValue } from '../construct/types.ts';
 import { $doc, $history, $values, docReset } from './stores/construction.ts';
 import { $selection, $tool, $view, noticeShow, worldToScreen } from './stores/interaction.ts';
 import { $search } from './stores/search.ts';
 import { STORAGE_KEY, persistRestore, persistSave } from './persist.ts';
 import { NinefoldError } from '../exact/errors.ts';
-import { frameLog } from './components/nf-canvas.ts';
+import { frameLog, frameParts } from './components/nf-canvas.ts';
 import './components/nf-app.ts';
 import './scene-file/wire.ts'; // E8 wiring: scene panel (file, figure, trials) in the side bar; default demo scene when nothing was restored
 
@@ -64,6 +64,11 @@ function installTestHook(): void {
     tool: () => $tool.get(),
     search: () => json($search.get()),
     frames: () => frameLog.slice(),
+    frameParts: () => frameParts.slice(),
+    /** Open a construction given as JSON (validated as a scene file's construction would be). */
+    load: (doc: unknown) => {
+      docReset(constructionValidate(doc));
+    },
     /** Start from an empty construction with the default view (tests begin from a known state). */
     reset: () => {
       window.localStorage.removeItem(STORAGE_KEY);

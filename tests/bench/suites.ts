@@ -8,5 +8,6 @@ import { curveBench } from './curve.bench.ts';
 import { traceBench } from './trace.bench.ts';
 import { scenesBench } from './scenes.bench.ts';
 import { groupBench } from './group.bench.ts';
+import { dragBench } from './drag.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, pointsBench, curveBench, traceBench, scenesBench, groupBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, nineBench, pointsBench, curveBench, traceBench, scenesBench, groupBench, dragBench];

@@ -1,11 +1,12 @@
 // Browser-test helpers for the canvas app: serve the page with vite on 127.0.0.1, drive headless Debian
 // Chromium through playwright-core, save screenshots, and read the app's state through window.__ninefold.
 import { mkdirSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { createServer, type ViteDevServer } from 'vite';
 import { chromium, type Browser, type Page } from 'playwright-core';
 
-export const ROOT = resolve(__dirname, '../..');
+export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 export const SHOTS = resolve(ROOT, 'test-output/e2e');
 export const SCREENS = resolve(ROOT, 'tests/e2e/screens');
 

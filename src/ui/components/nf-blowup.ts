@@ -42,7 +42,8 @@ export class NfBlowup extends LitElement {
       dt { color: var(--ink-soft); }
       dd { margin: 0; min-width: 0; overflow-wrap: anywhere; }
       .slider { display: grid; grid-template-columns: max-content 1fr max-content; gap: 6px; align-items: center; margin: 6px 0; }
-      input[type='range'] { width: 100%; accent-color: var(--accent); }
+      input[type='range'] { width: 100%; min-width: 0; margin: 0; accent-color: var(--accent); }
+      .slider .param { min-width: 48px; text-align: right; }
       .row { display: flex; gap: 6px; flex-wrap: wrap; }
     `,
   ];
@@ -103,7 +104,7 @@ export class NfBlowup extends LitElement {
     let approx;
     try {
       const p = parametrisationAt(par, s, t);
-      at = p.join(':');
+      at = p[2] === 0n ? `${p.join(':')} (at infinity)` : `(${ratToString(rat(p[0], p[2]))}, ${ratToString(rat(p[1], p[2]))}) = ${p.join(':')}`;
       approx = f3ToApprox(f3FromBig(p));
     } catch (e) {
       at = e instanceof NinefoldError ? e.message : String(e);

@@ -8,7 +8,7 @@ import { $doc, $values } from '../stores/construction.ts';
 import { $blowup, $hover, $notice, $picks, $selection, $view } from '../stores/interaction.ts';
 import { $region, $search } from '../stores/search.ts';
 import { PAPER, sceneDisplay } from '../display.ts';
-import { canvasCancel, canvasPointerDown, canvasPointerMove, canvasPointerUp, canvasWheel } from '../canvas-controller.ts';
+import { canvasCancel, canvasGestureActive, canvasPointerDown, canvasPointerMove, canvasPointerUp, canvasWheel } from '../canvas-controller.ts';
 import { sinkCreate, type Sink } from '../canvas-sink.ts';
 import { pointParse } from '../../plane/parse-point.ts';
 import { f3FromBig, f3ToApprox } from '../../construct/float.ts';
@@ -17,6 +17,8 @@ import { theme } from './theme.ts';
 
 /** Times of the last frames drawn (performance.now() at the end of each draw), for the drag benchmark. */
 export const frameLog: number[] = [];
+/** For each frame: ms spent building the display list, replaying it into Pixi, and rendering. */
+export const frameParts: [number, number, number][] = [];
 
 @customElement('nf-canvas')
 export class NfCanvas extends LitElement {
@@ -106,6 +108,7 @@ export class NfCanvas extends LitElement {
     if (this.foundCache.key !== search.points) {
       this.foundCache = { key: search.points, points: search.points.map((p) => f3ToApprox(f3FromBig(pointParse(p)))) };
     }
+    const t0 = performance.now();
     const list = sceneDisplay($doc.get(), $values.get(), $view.get(), {
       selection: new Set($selection.get()),
       hover: $hover.get(),
@@ -114,9 +117,14 @@ export class NfCanvas extends LitElement {
       region: $region.get(),
       blowup: $blowup.get(),
     });
+    const t1 = performance.now();
     this.sink.draw(list, $view.get());
+    const t2 = performance.now();
     this.app.render();
-    frameLog.push(performance.now());
+    const t3 = performance.now();
+    frameLog.push(t3);
+    frameParts.push([t1 - t0, t2 - t1, t3 - t2]);
+    if (frameParts.length > 2000) frameParts.splice(0, 1000);
     if (frameLog.length > 2000) frameLog.splice(0, 1000);
   }
 
@@ -135,6 +143,12 @@ export class NfCanvas extends LitElement {
   private readonly move = (e: PointerEvent): void => {
     const [x, y] = this.local(e);
     canvasPointerMove(x, y);
+    if (canvasGestureActive()) {
+      // While dragging, the frame follows the pointer at once (no wait for the next animation frame).
+      if (this.pending) cancelAnimationFrame(this.pending);
+      this.pending = 0;
+      this.draw();
+    }
     const v = $view.get();
     const wx = v.cx + (x - v.width / 2) / v.scale;
     const wy = v.cy - (y - v.height / 2) / v.scale;

@@ -23,7 +23,7 @@ export class NfCurvePanel extends LitElement {
       input.eq { flex: 1; min-width: 0; font-family: 'DejaVu Sans Mono', monospace; }
       input.eq[aria-invalid='true'] { border-color: var(--fails); background: #fff4f1; }
       .error { color: var(--fails); margin: 4px 0 0; }
-      .caret { font-family: 'DejaVu Sans Mono', monospace; white-space: pre; color: var(--fails); margin: 0; font-size: 12px; }
+      .caret { font-family: 'DejaVu Sans Mono', monospace; white-space: pre; color: var(--fails); margin: 4px 0 0; font-size: 12px; overflow-x: auto; }
       .build { display: flex; flex-wrap: wrap; gap: 4px; margin: 6px 0; }
       .curves { display: flex; flex-wrap: wrap; gap: 4px; margin: 6px 0; }
       .curves button[aria-pressed='true'] { border-color: var(--accent); background: var(--accent-soft); font-weight: 600; }
@@ -58,7 +58,8 @@ export class NfCurvePanel extends LitElement {
         <button type="submit">Add curve</button>
       </form>
       ${this.error
-        ? html`<p class="caret" aria-hidden="true">${' '.repeat(Math.max(0, this.error.column - 1))}^</p>
+        ? html`<pre class="caret" aria-hidden="true">${this.error.text}
+${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
             <p class="error" id="eq-error" role="alert">At column ${this.error.column}: ${this.error.message}</p>`
         : nothing}
       <div class="build" aria-label="Curves from the selected points">
