@@ -7,7 +7,7 @@
 // Curves, ch. 7): expanding F(λP + μQ) = λ³F(P) + λ²μ Q·∇F(P) + λμ² P·∇F(Q) + μ³F(Q) gives the third
 // root directly, with no special case for points at infinity.
 import { Degenerate, InvalidInput, NotOnCurve, SingularPoint } from '../exact/errors.ts';
-import { bigAbs, content } from '../exact/integer.ts';
+import { bigAbs, content, primitive } from '../exact/integer.ts';
 import { formEval, formGradient, type Form } from '../poly/form.ts';
 import { cross, dot, triple, tripleIsZero, tripleProportional, type Line, type Point } from '../plane/point.ts';
 
@@ -104,6 +104,15 @@ export function cubicIsFlex(f: Form, p: Point): boolean {
 
 // Assumes p != q projectively, both on f and smooth, both primitive.
 export function chordThird(f: Form, p: Point, q: Point, names: readonly [string, string] = ['P', 'Q']): Point {
+  const r = chordThirdRaw(f, p, q, names);
+  return triple(r[0], r[1], r[2]);
+}
+
+/**
+ * P * Q as an integer triple that need not be primitive (internal tier: p != q projectively, both smooth
+ * points of f, any non-zero scaling). The group law chains these and makes only its answer primitive.
+ */
+export function chordThirdRaw(f: Form, p: readonly bigint[], q: readonly bigint[], names: readonly [string, string] = ['P', 'Q']): bigint[] {
   const a = dot(p, cubicGradientAt(f, q));
   const b = dot(q, cubicGradientAt(f, p));
   const r = [a * p[0] - b * q[0], a * p[1] - b * q[1], a * p[2] - b * q[2]];
@@ -114,13 +123,20 @@ export function chordThird(f: Form, p: Point, q: Point, names: readonly [string,
     );
   }
   // Measured on random cubics: for primitive P, Q the content of aP − bQ is a multiple of c³, c the
-  // content of P × Q (the index of ZP + ZQ in the integer points of the line). Dividing it out first
-  // leaves the final gcd on numbers about half as long; the division is checked, so it is only a shortcut.
-  return primitiveAfter(r, content(cross(p, q)));
+  // content of P × Q (the index of ZP + ZQ in the integer points of the line), and what is left is
+  // usually 1 (on curves of small discriminant always, in our runs). The division is checked, so it is
+  // only a shortcut: chained steps skip the gcd of the result, and the answer is made primitive once.
+  return divideCube(r, content(cross(p, q)));
 }
 
 // Assumes p a smooth primitive point of f.
 export function tangentThird(f: Form, p: Point, name = 'P'): Point {
+  const r = tangentThirdRaw(f, p, name);
+  return triple(r[0], r[1], r[2]);
+}
+
+/** The tangential point of p as an integer triple that need not be primitive (internal tier, as chordThirdRaw). */
+export function tangentThirdRaw(f: Form, p: readonly bigint[], name = 'P'): bigint[] {
   const g = cubicGradientAt(f, p);
   // D = g × e_i is the point of the tangent on the coordinate line X_i = 0; take i with p_i ≠ 0 smallest.
   let i = -1;
@@ -148,15 +164,16 @@ export function tangentThird(f: Form, p: Point, name = 'P'): Point {
     throw new Degenerate(`the tangent line at ${name} lies inside the curve, so it has no third point`, name);
   }
   // With D on X_i = 0, p_i³ divides the result (measured on random cubics; checked before use).
-  return primitiveAfter(r, i >= 0 ? bigAbs(p[i]) : 1n);
+  return divideCube(r, i >= 0 ? bigAbs(p[i]) : 1n);
 }
 
-/** r made primitive, dividing by c³ first when it divides every entry exactly. */
-function primitiveAfter(r: readonly bigint[], c: bigint): Point {
-  if (c > 1n) {
-    const d = c * c * c;
-    const q = r.map((x) => x / d);
-    if (q.every((x, k) => x * d === r[k])) return triple(q[0], q[1], q[2]);
-  }
-  return triple(r[0], r[1], r[2]);
+/**
+ * r divided by c³ when that divides every entry exactly; when it does not (the inputs carried a common
+ * factor), r made primitive, so no stray factor outlives one step. The same projective point either way.
+ */
+function divideCube(r: bigint[], c: bigint): bigint[] {
+  if (c <= 1n) return r;
+  const d = c * c * c;
+  const q = r.map((x) => x / d);
+  return q.every((x, k) => x * d === r[k]) ? q : primitive(r);
 }

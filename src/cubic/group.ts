@@ -9,8 +9,8 @@
 // to the law with base O2, because (P + O2) +₂ (Q + O2) = P + Q + O2 where X +₂ Y = X + Y − O2.
 import { InvalidInput } from '../exact/errors.ts';
 import type { Form } from '../poly/form.ts';
-import { tripleEquals, tripleIsZero, cross, type Point } from '../plane/point.ts';
-import { chordThird, cubicRequire, cubicRequireSmoothPoint, tangentThird } from './chord.ts';
+import { cross, triple, tripleIsZero, type Point } from '../plane/point.ts';
+import { chordThirdRaw, cubicRequire, cubicRequireSmoothPoint, tangentThird, tangentThirdRaw } from './chord.ts';
 
 /** A cubic with a chosen base point; `oo` is O * O, the point whose chord with P gives −P. */
 export interface CubicGroup {
@@ -26,37 +26,50 @@ export function groupMake(f: Form, o: Point, name = 'base'): CubicGroup {
   return { curve: f, base: o, oo: tangentThird(f, o, name) };
 }
 
-// Assumes p, q smooth points of g.curve.
-function star(g: CubicGroup, p: Point, q: Point): Point {
-  return tripleIsZero(cross(p, q)) ? tangentThird(g.curve, p) : chordThird(g.curve, p, q);
+type Raw = readonly bigint[];
+
+const sameRaw = (p: Raw, q: Raw) => tripleIsZero(cross(p, q));
+const canonical = (p: Raw): Point => triple(p[0], p[1], p[2]);
+
+// Assumes p, q smooth points of g.curve, as integer triples of any non-zero scale.
+function starRaw(g: CubicGroup, p: Raw, q: Raw): Raw {
+  return sameRaw(p, q) ? tangentThirdRaw(g.curve, p) : chordThirdRaw(g.curve, p, q);
+}
+
+function addRaw(g: CubicGroup, p: Raw, q: Raw): Raw {
+  if (sameRaw(p, g.base)) return q;
+  if (sameRaw(q, g.base)) return p;
+  return starRaw(g, g.base, starRaw(g, p, q));
+}
+
+function negateRaw(g: CubicGroup, p: Raw): Raw {
+  return sameRaw(p, g.base) ? p : starRaw(g, p, g.oo);
 }
 
 /** P + Q in the group (internal tier: points already checked). */
 export function groupAddIn(g: CubicGroup, p: Point, q: Point): Point {
-  if (tripleEquals(p, g.base)) return q;
-  if (tripleEquals(q, g.base)) return p;
-  return star(g, g.base, star(g, p, q));
+  return canonical(addRaw(g, p, q));
 }
 
 /** −P in the group (internal tier). */
 export function groupNegateIn(g: CubicGroup, p: Point): Point {
-  if (tripleEquals(p, g.base)) return p;
-  return star(g, p, g.oo);
+  return canonical(negateRaw(g, p));
 }
 
 /**
  * nP by chord-and-tangent double-and-add on the cubic itself (internal tier); negative n gives −(|n|P),
- * n = 0 gives O. (Computing on the short Weierstrass model in Jacobian coordinates and mapping back was
- * measured too: no faster at n ≤ 200 and slower beyond, so it is not used.)
+ * n = 0 gives O. Intermediate points are kept at whatever scale the chord formulas leave (usually
+ * primitive already, see chordThirdRaw) and only the answer is made primitive. (Computing on the short
+ * Weierstrass model in Jacobian coordinates and mapping back was measured too: no faster at n ≤ 200
+ * and slower beyond, so it is not used.)
  */
 export function groupMultipleIn(g: CubicGroup, p: Point, n: bigint): Point {
-  if (n < 0n) return groupNegateIn(g, groupMultipleIn(g, p, -n));
-  let acc = g.base;
-  for (const b of n.toString(2)) {
-    acc = groupAddIn(g, acc, acc);
-    if (b === '1') acc = groupAddIn(g, acc, p);
+  let acc: Raw = g.base;
+  for (const b of (n < 0n ? -n : n).toString(2)) {
+    acc = addRaw(g, acc, acc);
+    if (b === '1') acc = addRaw(g, acc, p);
   }
-  return acc;
+  return canonical(n < 0n ? negateRaw(g, acc) : acc);
 }
 
 /** P + Q on the smooth cubic f with base point O. */
