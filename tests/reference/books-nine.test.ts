@@ -17,7 +17,7 @@ import { curvesThroughPoints } from '../../src/plane/linear-system.ts';
 import { pointsCollinear } from '../../src/plane/incidence.ts';
 import { lineLineMeet, pointPointJoin, triple, tripleProportional, type Point } from '../../src/plane/point.ts';
 import { Degenerate, SingularPoint } from '../../src/exact/errors.ts';
-import { gp, seededRandom } from './oracles.ts';
+import { gp, gpVector, seededRandom } from './oracles.ts';
 
 function randomPoints(rand: () => number, n: number, size: number): Point[] {
   const out: Point[] = [];
@@ -119,4 +119,39 @@ describe('the ninth point (Eisenbud–Green–Harris §1; Silverman–Tate §I.2
       expect(dim > 1, `seed ${seed}: ${s.map((p) => p.join(':')).join(' ')}`).toBe(fiveOnLine || allOnConic);
     }
   });
+
+  it('PARI: nineCheck agrees with matrank on 36 seeded nine-point sets (pencil base points, random, special positions; seed 90)', () => {
+    const seed = 90;
+    const rand = seededRandom(seed);
+    const sets: Point[][] = [];
+    while (sets.length < 36) {
+      const kind = sets.length % 3;
+      if (kind === 0) {
+        const eight = randomPoints(rand, 8, 6);
+        const r = ninthPoint(eight);
+        if (r.point && r.coincidesWith === null) sets.push([...eight, r.point]);
+      } else if (kind === 1) {
+        sets.push(randomPoints(rand, 9, 6));
+      } else {
+        // four on the line x = 2y and five more
+        const line = [0, 1, 2, -3].map((t) => triple(BigInt(2 * t), BigInt(t), 1n));
+        const rest = randomPoints(rand, 5, 6).filter((p) => !line.some((q) => tripleProportional(p, q)));
+        if (rest.length === 5) sets.push([...rest.slice(0, 4), ...line, rest[4]]);
+      }
+    }
+    const mons = 'mons(P) = [P[1]^3, P[1]^2*P[2], P[1]^2*P[3], P[1]*P[2]^2, P[1]*P[2]*P[3], P[1]*P[3]^2, P[2]^3, P[2]^2*P[3], P[2]*P[3]^2, P[3]^3];';
+    const script = mons + '\n' + sets.map((s9) => {
+      const rows = s9.map((p) => `mons([${p.join(',')}])`);
+      return `print([matrank(matconcat([${rows.join('; ')}])), matrank(matconcat([${rows.slice(0, 8).join('; ')}]))]);`;
+    }).join('\n');
+    const out = gp(script);
+    sets.forEach((s9, i) => {
+      const [r9, r8] = gpVector(out[i]).map(Number);
+      const c = nineCheck(s9);
+      const ctx = `seed ${seed}, set ${i}: ${s9.map((p) => p.join(':')).join(' ')}`;
+      expect(c.dimension, ctx).toBe(10 - r9 - 1);
+      expect(c.holds, ctx).toBe(r9 === r8);
+    });
+  });
 });
+
