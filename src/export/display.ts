@@ -5,9 +5,11 @@
 // The rules (style keys, status shapes, dash patterns, label places) are the canvas's own (src/ui/display.ts
 // draws the same base list plus selection highlights); widths, radii and dashes are CSS pixels, which the
 // exporters turn into points.
-import { curvePrepare, curveTrace, type FloatLandmarks } from '../../shaders-free-render/trace.ts';
+import { curvePrepare, curveTrace, type FloatLandmarks, type PreparedCurve } from '../../shaders-free-render/trace.ts';
+import { curveLandmarks } from '../poly/curve-landmarks.ts';
+import type { CurveValue } from '../construct/types.ts';
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
-import type { ConstructionDoc, ConstructionObject, ObjectValue, Style, ValueMap } from '../construct/types.ts';
+import type { ConstructionDoc, Style, ValueMap } from '../construct/types.ts';
 
 export interface DisplayView {
   readonly xmin: number;
@@ -20,8 +22,8 @@ export interface DisplayView {
 }
 
 export interface DisplayOptions {
-  /** Exact landmarks of curves by id (critical abscissae, singular points) when the core has them. */
-  readonly landmarks?: ReadonlyMap<string, FloatLandmarks>;
+  /** Draw the coordinate axes with unit ticks, as the canvas does (figures leave them out by default). */
+  readonly axes?: boolean;
 }
 
 /** The page's paper colour: the outline of an exact point, so it stands clear of the curve under it. */
@@ -51,9 +53,7 @@ export function constructionDisplayList(doc: ConstructionDoc, values: ValueMap, 
     if (v.type === 'curve') {
       let trace;
       try {
-        trace = curveTrace(curvePrepare({ degree: degreeOf(v.approx.length), coeffs: v.approx }, opts.landmarks?.get(o.id) ?? null), {
-          xmin: view.xmin, xmax: view.xmax, ymin: view.ymin, ymax: view.ymax, width: view.widthPx, height: view.heightPx,
-        });
+        trace = curveTrace(curvePrepared(v), { xmin: view.xmin, xmax: view.xmax, ymin: view.ymin, ymax: view.ymax, width: view.widthPx, height: view.heightPx });
       } catch {
         continue; // a curve the tracer refuses is left undrawn; its report says why
       }
@@ -91,7 +91,71 @@ export function constructionDisplayList(doc: ConstructionDoc, values: ValueMap, 
       if (showLabel) labels.push({ kind: 'label', x: a.x + 7 * px, y: a.y + 7 * px, text: o.label, style: labelStyle(LABEL_INK), owner: o.id });
     }
   }
-  return { items: [...strokes, ...lines, ...points, ...labels], styles };
+  const axisItems: DisplayItem[] = [];
+  if (opts.axes) axes(axisItems, styles, view);
+  return { items: [...axisItems, ...strokes, ...lines, ...points, ...labelsDeclutter(labels, view)], styles };
+}
+
+/** An exact curve is traced with the core's exact landmarks (critical abscissae, lines that may carry
+ * singular points), so nodes, cusps and isolated points come out right; otherwise a float search. */
+function curvePrepared(v: CurveValue): PreparedCurve {
+  const f = v.form;
+  if (f) {
+    try {
+      const l = curveLandmarks(f);
+      const marks: FloatLandmarks = { shear: l.shear, critical: l.critical, singularLines: l.singularLines };
+      return curvePrepare({ degree: f.degree, coeffs: v.approx }, marks);
+    } catch {
+      // fall through to the float search
+    }
+  }
+  return curvePrepare({ degree: degreeOf(v.approx.length), coeffs: v.approx });
+}
+
+/**
+ * Labels that would overlap one already placed are left out, so text stays readable however crowded the
+ * view: a grid of 12-pixel cells, each label claiming the cells of its box (the canvas's rule).
+ */
+function labelsDeclutter(labels: readonly DisplayItem[], view: DisplayView): DisplayItem[] {
+  const taken = new Set<string>();
+  const out: DisplayItem[] = [];
+  for (const item of labels) {
+    if (item.kind !== 'label') continue;
+    const sx = ((item.x - view.xmin) / (view.xmax - view.xmin)) * view.widthPx;
+    const sy = ((view.ymax - item.y) / (view.ymax - view.ymin)) * view.heightPx;
+    const w = 8 * item.text.length + 4;
+    const cells: string[] = [];
+    for (let cx = Math.floor(sx / 12); cx <= Math.floor((sx + w) / 12); cx++) for (let cy = Math.floor((sy - 16) / 12); cy <= Math.floor(sy / 12); cy++) cells.push(`${cx},${cy}`);
+    if (cells.some((c) => taken.has(c))) continue;
+    for (const c of cells) taken.add(c);
+    out.push(item);
+  }
+  return out;
+}
+
+/** Faint axes with a tick at each unit step that leaves at least 40 pixels between ticks. */
+function axes(items: DisplayItem[], styles: Record<string, ItemStyle>, view: DisplayView): void {
+  styles.axis = style('#cfc6b0', 1, '#cfc6b0', 0);
+  styles['axis:label'] = style('#8f8672', 0, '#8f8672', 0, [], 11);
+  const scale = view.widthPx / (view.xmax - view.xmin); // pixels per world unit
+  const step = 10 ** Math.ceil(Math.log10(40 / scale));
+  const tick = 4 / scale;
+  if (view.ymin <= 0 && view.ymax >= 0) {
+    items.push({ kind: 'segment', x0: view.xmin, y0: 0, x1: view.xmax, y1: 0, style: 'axis' });
+    for (let x = Math.ceil(view.xmin / step) * step; x <= view.xmax; x += step) {
+      if (Math.abs(x) < step / 2) continue;
+      items.push({ kind: 'segment', x0: x, y0: -tick, x1: x, y1: tick, style: 'axis' });
+      items.push({ kind: 'label', x: x + 2 / scale, y: -17 / scale, text: String(Number(x.toPrecision(6))), style: 'axis:label' });
+    }
+  }
+  if (view.xmin <= 0 && view.xmax >= 0) {
+    items.push({ kind: 'segment', x0: 0, y0: view.ymin, x1: 0, y1: view.ymax, style: 'axis' });
+    for (let y = Math.ceil(view.ymin / step) * step; y <= view.ymax; y += step) {
+      if (Math.abs(y) < step / 2) continue;
+      items.push({ kind: 'segment', x0: -tick, y0: y, x1: tick, y1: y, style: 'axis' });
+      items.push({ kind: 'label', x: 5 / scale, y: y - 6 / scale, text: String(Number(y.toPrecision(6))), style: 'axis:label' });
+    }
+  }
 }
 
 function style(stroke: string, width: number, fill: string, radius: number, dash: readonly number[] = [], fontSize = LABEL_PX): ItemStyle {

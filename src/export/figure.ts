@@ -41,6 +41,8 @@ export interface FigureOptions {
   readonly fontFamily?: string;
   /** Map colours to greys (by luminance) so a black-and-white print keeps every object apart. */
   readonly greyscale?: boolean;
+  /** Draw the coordinate axes with unit ticks, as on the screen (default: no axes). */
+  readonly axes?: boolean;
   readonly title?: string;
 }
 

@@ -18,6 +18,6 @@ export function sceneFigureInput(scene: Scene, options: FigureOptions = {}, valu
     ...view,
     widthPx: Math.round(page.widthPt * TRACE_PX_PER_PT),
     heightPx: Math.round(page.heightPt * TRACE_PX_PER_PT),
-  });
+  }, { axes: options.axes ?? false });
   return { list, view, facts: constructionFacts(scene.doc, vals), options: { title: scene.title, ...options } };
 }

@@ -35,8 +35,8 @@ function write(path: string, data: string | Uint8Array, option: string): void {
 
 export const figure: Verb = {
   name: 'figure',
-  usage: 'figure SCENE.json [--svg OUT.svg] [--tikz OUT.tex] [--snippet OUT.tex] [--png OUT.png --dpi N] [--width PT] [--font PT] [--grey]',
-  switches: ['grey'],
+  usage: 'figure SCENE.json [--svg OUT.svg] [--tikz OUT.tex] [--snippet OUT.tex] [--png OUT.png --dpi N] [--width PT] [--font PT] [--grey] [--axes]',
+  switches: ['grey', 'axes'],
   run(args: Args) {
     const file = positionalAt(args, 0, 'scene file');
     const scene = sceneParse(sceneFileRead(file));
@@ -52,6 +52,7 @@ export const figure: Verb = {
       widthPt: optionInteger(args, 'width', 360, 36, 4000),
       fontSizePt: optionInteger(args, 'font', 9, 4, 48),
       greyscale: args.options.get('grey') === true,
+      axes: args.options.get('axes') === true,
     };
     const input = sceneFigureInput(scene, options);
     const written: Record<string, string> = {};

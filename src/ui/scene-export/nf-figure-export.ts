@@ -31,10 +31,11 @@ export class NfFigureExport extends LitElement {
   @state() private fontPt = 9;
   @state() private dpi = 300;
   @state() private greyscale = false;
+  @state() private axes = false;
   @state() private note = '';
 
   private input(): FigureInput {
-    return sceneFigureInput(sceneCurrent(), { widthPt: this.widthPt, fontSizePt: this.fontPt, greyscale: this.greyscale }, sceneValues());
+    return sceneFigureInput(sceneCurrent(), { widthPt: this.widthPt, fontSizePt: this.fontPt, greyscale: this.greyscale, axes: this.axes }, sceneValues());
   }
 
   private base(): string {
@@ -114,6 +115,8 @@ export class NfFigureExport extends LitElement {
         <input id="d" type="number" min="10" max="2400" .value=${String(this.dpi)} @change=${(e: Event) => (this.dpi = this.num(e, 10, 2400, 300))} />
         <label for="g">Greyscale</label>
         <input id="g" type="checkbox" .checked=${this.greyscale} @change=${(e: Event) => (this.greyscale = (e.target as HTMLInputElement).checked)} />
+        <label for="a">Axes</label>
+        <input id="a" type="checkbox" .checked=${this.axes} @change=${(e: Event) => (this.axes = (e.target as HTMLInputElement).checked)} />
       </div>
       <div class="row">
         <button @click=${() => this.svg()}>SVG</button>

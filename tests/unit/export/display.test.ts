@@ -4,6 +4,7 @@ import { lineClip, constructionDisplayList } from '../../../src/export/display.t
 import { constructionEvaluate } from '../../../src/construct/evaluate.ts';
 import { constructionAdd, constructionEmpty } from '../../../src/construct/graph.ts';
 import { seededUniform } from '../../../src/construct/trials.ts';
+import type { DisplayList } from '../../../shaders-free-render/display-list.ts';
 
 const VIEW = { xmin: -4, xmax: 4, ymin: -3, ymax: 3, widthPx: 800, heightPx: 600 };
 
@@ -70,6 +71,49 @@ describe('constructionDisplayList', () => {
         const y = it.points[k + 1];
         expect(Math.abs(y * y - (x * x * x - x))).toBeLessThan(0.05 * (1 + Math.abs(x) ** 3));
       }
+    }
+  });
+});
+
+describe('the figure draws what the canvas draws', () => {
+  // src/ui/display.ts draws the canvas: this base list plus selection, hover and blow-up extras. With no
+  // extras the two must agree item for item, or a figure would not show what the screen shows.
+  it('on every demo scene, the display list equals the canvas list without highlights', async () => {
+    const { readFileSync, readdirSync } = await import('node:fs');
+    const { sceneParse } = await import('../../../src/scene/load.ts');
+    const { sceneDisplay } = await import('../../../src/ui/display.ts');
+    const dir = new URL('../../../scenes/', import.meta.url);
+    const files = readdirSync(dir).filter((f) => f.endsWith('.json') && f !== 'index.json');
+    expect(files.length).toBeGreaterThanOrEqual(6);
+    for (const file of files) {
+      const scene = sceneParse(readFileSync(new URL(file, dir), 'utf8'));
+      const values = constructionEvaluate(scene.doc);
+      const view = { cx: 1.25, cy: 0.5, scale: 50, width: 640, height: 480 };
+      const box = { xmin: view.cx - 6.4, xmax: view.cx + 6.4, ymin: view.cy - 4.8, ymax: view.cy + 4.8 };
+      const ours = constructionDisplayList(scene.doc, values, { ...box, widthPx: 640, heightPx: 480 }, { axes: true });
+      const canvas = sceneDisplay(scene.doc, values, view, { selection: new Set(), hover: null, picks: [] });
+      // The canvas also draws points a little outside the view (it pans); a figure leaves them out.
+      const inView = new Set(
+        scene.doc.objects
+          .filter((o) => {
+            const v = values.get(o.id);
+            return v?.type !== 'point' || (v.approx.finite && v.approx.x >= box.xmin && v.approx.x <= box.xmax && v.approx.y >= box.ymin && v.approx.y <= box.ymax);
+          })
+          .map((o) => o.id),
+      );
+      const text = (list: DisplayList) =>
+        list.items
+          .filter((i) => i.owner === undefined || inView.has(i.owner))
+          .map((i) => {
+            const st = list.styles[i.style];
+            const s = `${st.stroke} ${st.width} ${st.fill} ${st.radius} [${st.dash.join(',')}]`;
+            const r = (x: number) => x.toFixed(9);
+            if (i.kind === 'polyline') return `polyline ${i.owner} ${s} ${i.closed} ${i.points.map(r).join(' ')}`;
+            if (i.kind === 'segment') return `segment ${i.owner ?? ''} ${s} ${[[i.x0, i.y0], [i.x1, i.y1]].map(([x, y]) => `${r(x)},${r(y)}`).sort().join(' ')}`;
+            if (i.kind === 'dot') return `dot ${i.owner ?? ''} ${i.role} ${s} ${r(i.x)},${r(i.y)}`;
+            return `label ${st.stroke} ${st.fontSize} ${JSON.stringify(i.text)} ${r(i.x)},${r(i.y)}`;
+          });
+      expect(text(ours), file).toEqual(text(canvas));
     }
   });
 });
