@@ -1,6 +1,6 @@
 // Shared argument readers for the cubic verbs: the equation, points on it, the base point of the group
 // law and integer multiples. Every error names the argument it came from.
-import { InvalidInput } from '../exact/errors.ts';
+import { Degenerate, InvalidInput } from '../exact/errors.ts';
 import { formParse } from '../poly/parse.ts';
 import type { Form } from '../poly/form.ts';
 import { pointParse } from '../plane/parse-point.ts';
@@ -87,4 +87,19 @@ export function rationalText(q: Rational): string {
 /** A model point as ["x", "y"] strings or "infinity". */
 export function modelPointJson(p: ModelPoint): [string, string] | 'infinity' {
   return p === 'infinity' ? p : [ratToString(p.x), ratToString(p.y)];
+}
+
+/**
+ * Runs a group-law computation, turning "a line lies inside the curve" into a message about the curve:
+ * the law needs a cubic without line components (irreducible; singular ones work on their smooth points).
+ */
+export function groupLawRun<T>(fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof Degenerate) {
+      throw new Degenerate(`the group law is not defined here: a line it uses lies inside the curve, so the cubic contains a line (${e.message})`, 'argument 1');
+    }
+    throw e;
+  }
 }

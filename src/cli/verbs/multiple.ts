@@ -2,7 +2,7 @@
 import type { Verb } from '../verb.ts';
 import { pointToString } from '../../plane/parse-point.ts';
 import { GROUP_MULTIPLE_LIMIT, groupMake, groupMultipleIn } from '../../cubic/group.ts';
-import { argBase, argCubic, argInteger, argSmoothPoint, argsNoMore } from '../cubic-args.ts';
+import { argBase, argCubic, argInteger, argSmoothPoint, argsNoMore, groupLawRun } from '../cubic-args.ts';
 
 export const multiple: Verb = {
   name: 'multiple',
@@ -13,6 +13,6 @@ export const multiple: Verb = {
     const n = argInteger(args, 2, 'the multiple N', GROUP_MULTIPLE_LIMIT);
     argsNoMore(args, 3);
     const g = groupMake(f, argBase(args, f), '--base');
-    return { point: pointToString(groupMultipleIn(g, p, n)), base: pointToString(g.base) };
+    return { point: pointToString(groupLawRun(() => groupMultipleIn(g, p, n))), base: pointToString(g.base) };
   },
 };

@@ -2,7 +2,7 @@
 import type { Verb } from '../verb.ts';
 import { pointToString } from '../../plane/parse-point.ts';
 import { groupMake, groupNegateIn } from '../../cubic/group.ts';
-import { argBase, argCubic, argSmoothPoint, argsNoMore } from '../cubic-args.ts';
+import { argBase, argCubic, argSmoothPoint, argsNoMore, groupLawRun } from '../cubic-args.ts';
 
 export const negate: Verb = {
   name: 'negate',
@@ -12,6 +12,6 @@ export const negate: Verb = {
     const p = argSmoothPoint(args, f, 1, 'P');
     argsNoMore(args, 2);
     const g = groupMake(f, argBase(args, f), '--base');
-    return { point: pointToString(groupNegateIn(g, p)), base: pointToString(g.base) };
+    return { point: pointToString(groupLawRun(() => groupNegateIn(g, p))), base: pointToString(g.base) };
   },
 };

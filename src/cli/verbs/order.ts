@@ -2,7 +2,7 @@
 import type { Verb } from '../verb.ts';
 import { pointToString } from '../../plane/parse-point.ts';
 import { groupOrder } from '../../cubic/order.ts';
-import { argBase, argCubic, argSmoothPoint, argsNoMore } from '../cubic-args.ts';
+import { argBase, argCubic, argSmoothPoint, argsNoMore, groupLawRun } from '../cubic-args.ts';
 
 export const order: Verb = {
   name: 'order',
@@ -12,6 +12,6 @@ export const order: Verb = {
     const p = argSmoothPoint(args, f, 1, 'P');
     argsNoMore(args, 2);
     const o = argBase(args, f);
-    return { order: groupOrder(f, o, p), base: pointToString(o) };
+    return { order: groupLawRun(() => groupOrder(f, o, p)), base: pointToString(o) };
   },
 };

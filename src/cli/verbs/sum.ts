@@ -2,7 +2,7 @@
 import type { Verb } from '../verb.ts';
 import { pointToString } from '../../plane/parse-point.ts';
 import { groupAddIn, groupMake } from '../../cubic/group.ts';
-import { argBase, argCubic, argSmoothPoint, argsNoMore } from '../cubic-args.ts';
+import { argBase, argCubic, argSmoothPoint, argsNoMore, groupLawRun } from '../cubic-args.ts';
 
 export const sum: Verb = {
   name: 'sum',
@@ -13,6 +13,6 @@ export const sum: Verb = {
     const q = argSmoothPoint(args, f, 2, 'Q');
     argsNoMore(args, 3);
     const g = groupMake(f, argBase(args, f), '--base');
-    return { point: pointToString(groupAddIn(g, p, q)), base: pointToString(g.base) };
+    return { point: pointToString(groupLawRun(() => groupAddIn(g, p, q))), base: pointToString(g.base) };
   },
 };

@@ -9,7 +9,7 @@ import { negate } from '../../../src/cli/verbs/negate.ts';
 import { multiple } from '../../../src/cli/verbs/multiple.ts';
 import { order } from '../../../src/cli/verbs/order.ts';
 import { weierstrass } from '../../../src/cli/verbs/weierstrass.ts';
-import { InvalidInput, NinefoldError, NotOnCurve, ParseError, SingularPoint } from '../../../src/exact/errors.ts';
+import { Degenerate, InvalidInput, NinefoldError, NotOnCurve, ParseError, SingularPoint } from '../../../src/exact/errors.ts';
 import { formParse } from '../../../src/poly/parse.ts';
 import { groupAdd, groupMultiple } from '../../../src/cubic/group.ts';
 import { pointParse } from '../../../src/plane/parse-point.ts';
@@ -72,5 +72,9 @@ describe('group-law verbs', () => {
     expect(errorOf(() => run(multiple, WEIER, '1,0', 'ten')).where).toBe('argument 3');
     expect(errorOf(() => run(third, GENERAL, '0,0')).where).toBe('argument 3');
     expect(errorOf(() => run(weierstrass, GENERAL)).where).toBe('--point');
+    // A cubic with a line component: the law is refused, naming the curve.
+    const reducible = errorOf(() => run(sum, '(x + y - 1)(x^2 + 2y^2 - 9)', '2,-1', '3,-2', '--base', '3,0'));
+    expect(reducible).toBeInstanceOf(Degenerate);
+    expect(reducible.where).toBe('argument 1');
   });
 });
