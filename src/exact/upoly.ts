@@ -262,6 +262,6 @@ export function upolyToString(p: readonly bigint[], v = 'x'): string {
 }
 
 export {
-  upolyGcd, upolySquarefreePart, upolySquarefreeFactorisation, upolyResultant, upolyDiscriminant,
+  upolyGcd, upolyGcdSubresultant, upolySquarefreePart, upolySquarefreeFactorisation, upolyResultant, upolyDiscriminant,
   type SquarefreeFactor,
 } from './upoly-gcd.ts';

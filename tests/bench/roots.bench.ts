@@ -1,19 +1,47 @@
-// Rational roots and the gcd kernel against PARI/GP. PARI's times are taken inside gp with gettime()
-// around a loop, so its start-up is excluded; ours are medians of repeated runs in this process.
+// Rational roots, real roots and the gcd kernels against PARI/GP. PARI's times are taken inside gp with
+// gettime() around a loop, so its start-up is excluded; ours are medians of repeated runs in this process.
+// Both sides are CPU time (gettime() is CPU time; ours from process.cpuUsage), so a busy machine inflates
+// neither side.
 //
 // "rational roots": degree-9 integer polynomials, each (two to four linear factors v·x − u with 1..6-digit
 // u, v) × (a random rest of the remaining degree with 50- or 500-digit coefficients). PARI's counterpart is
 // nfroots(,p): the rational roots over Q (without multiplicities; ours also returns multiplicities).
 // "gcd kernel": plain Euclid on BigInt vs the kernel in src/exact/gcd.ts vs PARI's gcd, at 100, 1,000 and
 // 20,000 digits, on pairs with a planted common factor.
-import { median, medianMs, type BenchFigure, type BenchSuite } from './bench.ts';
+import { median, type BenchFigure, type BenchSuite } from './bench.ts';
 import { gp, seededRandom } from '../reference/oracles.ts';
 import { upolyRationalRoots } from '../../src/exact/rational-roots.ts';
 import { upolyRealRootIntervals } from '../../src/exact/root-isolation.ts';
 import { algebraicRealRoots, algebraicToDecimal } from '../../src/exact/algebraic.ts';
 import { gcd, gcdEuclid } from '../../src/exact/gcd.ts';
-import { upolyMul, type UPoly } from '../../src/exact/upoly.ts';
+import { upolyGcd, upolyGcdSubresultant, upolyMul, upolyResultant, upolySquarefreeFactorisation, type UPoly } from '../../src/exact/upoly.ts';
 import { ratToString } from '../../src/exact/rational.ts';
+
+/**
+ * Median CPU time in ms of one call of fn (process.cpuUsage, µs resolution): PARI's gettime() is CPU time
+ * too, so the ratio is like for like even when other work shares the machine. Each of `reps` samples runs
+ * fn repeatedly for at least `minMs` of CPU time.
+ */
+function medianMs(fn: () => unknown, reps = 5, warm = 1, minMs = 10): number {
+  const cpu = () => {
+    const u = process.cpuUsage();
+    return (u.user + u.system) / 1000;
+  };
+  for (let i = 0; i < warm; i++) fn();
+  const samples: number[] = [];
+  for (let r = 0; r < reps; r++) {
+    const t0 = cpu();
+    let n = 0;
+    let t = t0;
+    do {
+      fn();
+      n++;
+      t = cpu();
+    } while (t - t0 < minMs);
+    samples.push((t - t0) / n);
+  }
+  return median(samples);
+}
 
 function digitsExactly(rand: () => number, digits: number): bigint {
   let s = String(1 + Math.floor(rand() * 9));
@@ -105,6 +133,31 @@ export const gcdBench: BenchSuite = {
         values: { euclidMs, kernelMs, pariMs: pariMsEach, euclidOverKernel: euclidMs / kernelMs, kernelOverPari: kernelMs / pariMsEach },
       });
     }
+    // Polynomial gcd (sub-resultant PRS after the modular coprimality filter), square-free factorisation
+    // and resultant, degree 9, against PARI's gcd, factorsqf-free equivalent (gcd with the derivative) and
+    // polresultant.
+    const rand = seededRandom(2468);
+    const polyPairs = Array.from({ length: 20 }, () => {
+      const c = Array.from({ length: 4 }, () => digitsExactly(rand, 50));
+      const a = upolyMul(c, Array.from({ length: 7 }, () => digitsExactly(rand, 50)));
+      const b = upolyMul(c, Array.from({ length: 7 }, () => digitsExactly(rand, 50)));
+      return [a, b] as const;
+    });
+    const gpPairs = `v=[${polyPairs.map(([a, b]) => `[${gpPoly(a)},${gpPoly(b)}]`).join(',')}]; m=#v;`;
+    const gcdOurs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcd(a, b)), 7, 1) / polyPairs.length;
+    const gcdPari = pariMs(gpPairs, 'gcd(v[r%m+1][1], v[r%m+1][2])', 2000);
+    const gcdPrs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcdSubresultant(a, b)), 5, 1) / polyPairs.length;
+    figures.push({
+      label: 'gcd of two degree-9 polynomials with a common cubic, 50-digit coefficients (ours: modular; also the sub-resultant PRS)',
+      values: { ninefoldMs: gcdOurs, subresultantMs: gcdPrs, pariMs: gcdPari, ratio: gcdOurs / gcdPari, prsOverModular: gcdPrs / gcdOurs },
+    });
+    const sqfSet = polyPairs.map(([a, b]) => upolyMul(a, upolyGcd(a, b))); // a repeated cubic factor
+    const sqfOurs = medianMs(() => sqfSet.forEach((p) => upolySquarefreeFactorisation(p)), 7, 1) / sqfSet.length;
+    const sqfPari = pariMs(`w=[${sqfSet.map(gpPoly).join(',')}]; m=#w;`, 'my(p=w[r%m+1]); gcd(p, deriv(p))', 1000);
+    figures.push({ label: 'square-free factorisation, degree 12 with a repeated cubic (PARI: gcd(p, p\'), one step of it)', values: { ninefoldMs: sqfOurs, pariMs: sqfPari, ratio: sqfOurs / sqfPari } });
+    const resOurs = medianMs(() => polyPairs.forEach(([a, b]) => upolyResultant(a, upolyMul(b, [1n, 1n]))), 5, 1) / polyPairs.length;
+    const resPari = pariMs(gpPairs, 'polresultant(v[r%m+1][1], v[r%m+1][2]*(x+1))', 500);
+    figures.push({ label: 'resultant, degree 9 × 10, 50-digit coefficients (zero: common factor) ', values: { ninefoldMs: resOurs, pariMs: resPari, ratio: resOurs / resPari } });
     return figures;
   },
 };

@@ -4,10 +4,11 @@ import fc from 'fast-check';
 import {
   upoly, upolyAdd, upolyDegree, upolyDerivative, upolyDiscriminant, upolyDivExact, upolyEquals, upolyEval,
   upolyEvalRat, upolyGcd, upolyMul, upolyPrimitive, upolyPseudoDivision, upolyPseudoRem, upolyResultant,
-  upolyScale, upolySquarefreeFactorisation, upolySquarefreePart, upolySub, upolyTaylorShift, upolyPow,
+  upolyScale, upolySquarefreeFactorisation, upolyGcdSubresultant, upolySquarefreePart, upolySub, upolyTaylorShift, upolyPow,
 } from '../../../src/exact/upoly.ts';
 import { rat, ratEq } from '../../../src/exact/rational.ts';
 import { InvalidInput } from '../../../src/exact/errors.ts';
+import { seededRandom, randomBigInt } from '../../reference/oracles.ts';
 
 const coeff = fc.bigInt({ min: -(10n ** 25n), max: 10n ** 25n });
 const arbPoly = fc.array(coeff, { maxLength: 8 }).map((c) => upoly(c));
@@ -87,6 +88,18 @@ describe('upoly gcd, square-free factorisation, resultant', () => {
         expect(h.length).toBe(1);
       }),
     );
+  });
+  it('modular gcd agrees with the sub-resultant PRS, 60-digit coefficients and planted factors (seeded)', () => {
+    const seed = 777;
+    const rand = seededRandom(seed);
+    for (let i = 0; i < 60; i++) {
+      const rp = (deg: number, digits: number) => upoly(Array.from({ length: deg + 1 }, () => randomBigInt(rand, digits) || 1n));
+      const common = upolyPow(rp(1 + Math.floor(rand() * 3), 60), 1 + Math.floor(rand() * 2));
+      const p = upolyMul(common, rp(Math.floor(rand() * 6), 60));
+      const q = upolyMul(upolyScale(common, randomBigInt(rand, 5) || 3n), rp(Math.floor(rand() * 6), 60));
+      const want = upolyGcdSubresultant(p, q);
+      if (!upolyEquals(upolyGcd(p, q), want)) throw new Error(`seed ${seed}, case ${i}: p = [${p}], q = [${q}]`);
+    }
   });
   it('gcd handles zero and constants', () => {
     expect(upolyGcd([], [])).toEqual([]);
