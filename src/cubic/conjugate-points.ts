@@ -90,7 +90,7 @@ const TRIAL_LINES: readonly (readonly [Point, Point])[] = [
 ];
 
 /** Is the orbit singular on f: every partial at (X(θ):Y(θ):Z(θ)) divisible by poly? */
-function orbitIsSingular(f: Form, orbit: ConjugatePoints): boolean {
+export function orbitIsSingular(f: Form, orbit: ConjugatePoints): boolean {
   const e = Math.max(...orbit.coords.map((c) => c.length - 1), 0);
   const asBinary = orbit.coords.map((c) => Array.from({ length: e + 1 }, (_, i) => c[e - i] ?? 0n));
   return formGradient(f).every((g) => {

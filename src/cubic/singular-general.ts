@@ -20,6 +20,7 @@ import { formTransform, pointTransform, unimodularTrial } from '../poly/transfor
 import { formOnLine } from '../poly/substitute.ts';
 import { pointApprox, type Approx } from './approx.ts';
 import { jacobianDual } from './jacobian.ts';
+import { formSingularOrbits, type SingularOrbit } from './singular-orbits.ts';
 import { formLinearFactors, lineForm } from './linear-factors.ts';
 import { binaryCubicDiscriminant, doublePointShape, formTangentCone, splitNodeTangents, tangentIsOrdinaryCusp } from './tangent-cone.ts';
 
@@ -49,6 +50,9 @@ export interface GeneralSingularities {
   readonly repeatedLines: readonly { line: Point; multiplicity: number }[];
   /** Σ τ over all singular points (rational or not), from the Jacobian ideal; null when not reduced. */
   readonly tjurinaTotal: number | null;
+  /** The singular points that are not rational, exactly, by kind (src/cubic/singular-orbits.ts); null
+   * when general position was not reached (then only tjurinaTotal speaks for them). */
+  readonly orbits: readonly SingularOrbit[] | null;
 }
 
 function classify(f: Form, p: Point): GeneralSingularPoint {
@@ -133,10 +137,10 @@ export function formSingularPoints(f0: Form): GeneralSingularities {
   if (d < 1 || d > 6) throw new InvalidInput(`curves of degree 1 to 6 are handled, got degree ${d}`, 'curve');
   const f = formPrimitive(f0);
   const repeatedLines = formLinearFactors(f).lines.filter((l) => l.multiplicity > 1);
-  if (d === 1) return { degree: 1, smooth: true, reduced: true, points: [], repeatedLines: [], tjurinaTotal: 0 };
+  if (d === 1) return { degree: 1, smooth: true, reduced: true, points: [], repeatedLines: [], tjurinaTotal: 0, orbits: [] };
   const found = rationalSingularPoints(f);
   if (!found) {
-    return { degree: d, smooth: false, reduced: false, points: [], repeatedLines: repeatedLines.map((l) => ({ line: l.line, multiplicity: l.multiplicity })), tjurinaTotal: null };
+    return { degree: d, smooth: false, reduced: false, points: [], repeatedLines: repeatedLines.map((l) => ({ line: l.line, multiplicity: l.multiplicity })), tjurinaTotal: null, orbits: null };
   }
   const tjurinaTotal = jacobianDual(f).functionals.length;
   return {
@@ -146,5 +150,6 @@ export function formSingularPoints(f0: Form): GeneralSingularities {
     points: found.map((p) => classify(f, p)),
     repeatedLines: [],
     tjurinaTotal,
+    orbits: tjurinaTotal === 0 ? [] : formSingularOrbits(f),
   };
 }

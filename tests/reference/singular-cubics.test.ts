@@ -81,7 +81,7 @@ function expectedComponents(s: CubicSingularities): string {
 
 const PRELUDE_HIGHER = `proc hi(poly f, int n) { ideal J = jacob(f); def S0 = sat(J, maxideal(1)); ideal S = S0[1]; ideal Ss = std(S);
   list P = minAssGTZ(S); int i; int rat = 0; for (i = 1; i <= size(P); i++) { if (mult(std(P[i])) == 1) { rat++; } }
-  print("H " + string(n) + " " + string(dim(Ss)) + " " + string(mult(Ss)) + " " + string(rat)); }
+  print("H " + string(n) + " " + string(dim(Ss)) + " " + string(mult(Ss)) + " " + string(rat) + " " + string(mult(std(radical(S))))); }
 `;
 
 const ORDER_MILNOR: Record<string, [number, number]> = { node: [2, 1], cusp: [2, 2], tacnode: [2, 3], 'triple point': [3, 4] };
@@ -180,7 +180,8 @@ describe('curves of degree 4 to 6 agree with Singular (live)', () => {
   // Curves of our own, each also moved by a seeded unimodular matrix so that nothing sits at convenient
   // coordinates. Singular gives Σ τ (degree of the saturated Jacobian ideal) and the number of rational
   // singular points (minimal associated primes over Q of degree 1); locally at each of our points, the
-  // order and Milnor number.
+  // order and Milnor number; our orbits of non-rational points are checked in a ring with u adjoined, and
+  // rational plus orbit points must make up the degree of the radical (all singular points over C).
   const seed = 777;
   const texts = [
     '(y^2 - x^2)(y - 2)(x + 3) = 0',
@@ -193,6 +194,8 @@ describe('curves of degree 4 to 6 agree with Singular (live)', () => {
     '(y - x^2)^2 = x^5',
     '(x^2 + y^2 - 1)^3 = 7x^2y^3',
     'x^6 + y^6 - 2x^3y^2 + 4 = 0',
+    '(x^2 - 2)^2 + (y^2 - 3)^2 = 0',
+    '(x^2 + y^2 - 5)(x^2 - 3y^2 - 1)(x - 7) = 0',
   ];
   it(`${texts.length * 2} curves (seed ${seed})`, () => {
     const rand = seededRandom(seed);
@@ -210,18 +213,36 @@ describe('curves of degree 4 to 6 agree with Singular (live)', () => {
         script += `loc(${poly}, ${n}, ${k}, ${chart(p.point)});\n`;
       });
     });
+    // Orbits of non-rational singular points: the partials vanish at coords(u) modulo poly(u) (the ideal
+    // of the roots; poly need not be irreducible), in a ring with u as a fourth variable.
+    script += 'ring ru = 0,(u,x,y,z),dp;\n';
+    const orbitChecks: { n: number; k: number }[] = [];
+    curves.forEach((c, n) => {
+      (ours[n].orbits ?? []).forEach((o, k) => {
+        const up = (q: readonly bigint[]) => q.map((a, i) => `(${a})*u^${i}`).join('+') || '0';
+        script += `print("O ${n} ${k} " + string(size(reduce(subst(jacob(${singularPoly(c)}), x, ${up(o.orbit.coords[0])}, y, ${up(o.orbit.coords[1])}, z, ${up(o.orbit.coords[2])}), std(ideal(${up(o.orbit.poly)}))))));\n`;
+        orbitChecks.push({ n, k });
+      });
+    });
     const lines = singular(script, 120_000);
+    for (const o of orbitChecks) {
+      expect(lines.find((l) => l.startsWith(`O ${o.n} ${o.k} `)), `seed ${seed}, curve ${o.n}: orbit ${o.k}`).toBe(`O ${o.n} ${o.k} 0`);
+    }
+    expect(orbitChecks.length).toBeGreaterThan(3);
     const get = (key: string) => lines.find((l) => l.startsWith(key + ' '))?.trim().split(/\s+/).slice(key.split(' ').length);
     curves.forEach((c, n) => {
       const ctx = `seed ${seed}, curve ${n}: ${formToText(c)}`;
       const h = get(`H ${n}`);
       expect(h, ctx).toBeDefined();
-      const [dim, tau, rational] = h!.map(Number);
+      const [dim, tau, rational, all] = h!.map(Number);
       const s = ours[n];
       expect(s.reduced, ctx).toBe(true);
       expect(s.smooth, ctx).toBe(dim <= 0);
       if (dim > 0) expect(s.tjurinaTotal, `${ctx}: Σ τ`).toBe(tau);
       expect(s.points.length, `${ctx}: rational singular points`).toBe(rational);
+      expect(s.orbits, `${ctx}: general position reached`).not.toBeNull();
+      const orbitPoints = s.orbits!.reduce((a, o) => a + o.orbit.poly.length - 1, 0);
+      if (dim > 0) expect(s.points.length + orbitPoints, `${ctx}: all singular points over C`).toBe(all);
       s.points.forEach((p, k) => {
         const loc = get(`P ${n} ${k}`);
         expect(loc, `${ctx}: point ${k}`).toBeDefined();

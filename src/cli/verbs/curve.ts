@@ -12,7 +12,7 @@ import { pointToString } from '../../plane/parse-point.ts';
 import { positionalAt } from '../args.ts';
 import { cubicReport } from '../../cubic/curve-report.ts';
 import { formSingularPoints } from '../../cubic/singular-general.ts';
-import type { ConjugatePoints } from '../../cubic/conjugate-points.ts';
+import { conjugateMembers, type ConjugatePoints } from '../../cubic/conjugate-points.ts';
 import { algebraicToDecimal } from '../../exact/algebraic.ts';
 import { upolyToString } from '../../exact/upoly.ts';
 
@@ -53,13 +53,26 @@ export const curve: Verb = {
           realKind: p.realKind,
           milnor: p.milnor,
         })),
+        ...(g.orbits ?? []).flatMap((o) =>
+          conjugateMembers(o.orbit).map((m) => ({
+            point: null,
+            approx: m.approx.re,
+            ...(m.real ? {} : { approxImag: m.approx.im }),
+            real: m.real,
+            kind: o.kind,
+            split: null,
+            conjugates: conjugatesJson(o.orbit),
+            ...(m.root ? { root: { decimal: algebraicToDecimal(m.root, 15), lo: ratToString(m.root.lo), hi: ratToString(m.root.hi) } } : {}),
+          })),
+        ),
         ...g.repeatedLines.map((l) => ({ point: null, kind: l.multiplicity === 2 ? 'double line' : `line of multiplicity ${l.multiplicity}`, locus: eq({ degree: 1, coeffs: l.line }) })),
       ],
       tjurinaTotal: g.tjurinaTotal,
-      note:
-        g.reduced
-          ? 'rational singular points only are listed; tjurinaTotal counts all of them over C'
-          : 'the curve has a repeated component, so it is singular along a curve',
+      note: !g.reduced
+        ? 'the curve has a repeated component, so it is singular along a curve'
+        : g.orbits === null
+          ? 'rational singular points only are listed (general position not reached for the others); tjurinaTotal counts all of them over C'
+          : 'every singular point is listed: rational ones exactly, the others by conjugate orbit; tjurinaTotal is their Σ τ over C',
       cubicOnly: CUBIC_ONLY,
     };
   },
