@@ -90,3 +90,13 @@ describe('scene refusals name the place in the file', () => {
     expect(e).toBeInstanceOf(NinefoldError);
   });
 });
+
+describe('the README example (tests/fixtures/scene-readme-example.json)', () => {
+  it('opens, and its check holds', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { constructionEvaluate } = await import('../../../src/construct/evaluate.ts');
+    const s = sceneParse(readFileSync(new URL('../../fixtures/scene-readme-example.json', import.meta.url), 'utf8'));
+    expect(s.doc.objects.map((o) => o.label)).toEqual(['E', 'P', 'Q', 'P*Q', 'P*Q lies on E']);
+    expect(constructionEvaluate(s.doc).get('k5')).toMatchObject({ verdict: 'holds' });
+  });
+});
