@@ -96,7 +96,7 @@ function triplePointAt(p: Point, tangents: Form[]): SingularPoint {
 }
 
 /** The nodes of an orbit of conjugate points (each a node with the given tangent forms). */
-function conjugateNodes(orbit: ConjugatePoints, tangents: Form[]): SingularPoint[] {
+function conjugateNodes(orbit: ConjugatePoints, tangents: Form[], realKind: 'crunode' | 'acnode' = 'crunode'): SingularPoint[] {
   return conjugateMembers(orbit).map((m) => ({
     point: null,
     conjugates: orbit,
@@ -108,7 +108,7 @@ function conjugateNodes(orbit: ConjugatePoints, tangents: Form[]): SingularPoint
     kind: 'node' as const,
     ordinary: true,
     split: null,
-    realKind: m.real ? ('crunode' as const) : null,
+    realKind: m.real ? realKind : null,
     tangents,
     milnor: 1,
     tjurina: 1,
@@ -189,9 +189,14 @@ export function cubicSingularPoints(f0: Form): CubicSingularities {
     case 'three conjugate concurrent lines':
       points.push(triplePointAt(comps.vertex as Point, [f]));
       break;
-    case 'three conjugate lines':
-      points.push(...conjugateNodes(triangleVertices(f), [f]));
+    case 'three conjugate lines': {
+      // The orbit is indexed by the lines (a vertex is opposite its line): a real vertex lies on two real
+      // lines when all three are real, else on two complex conjugate ones (an isolated real point).
+      const orbit = triangleVertices(f);
+      const allReal = conjugateMembers(orbit).every((m) => m.real);
+      points.push(...conjugateNodes(orbit, [f], allReal ? 'crunode' : 'acnode'));
       break;
+    }
     case 'line and conic': {
       const l = lineOf(lineComps[0]);
       const q = (rest as { form: Form }).form;

@@ -111,6 +111,19 @@ describe('smoothness against the discriminant (an independent method: Aronhold i
   });
 });
 
+describe('three lines over a totally real cubic field', () => {
+  it('the norm form of X + θY + θ²Z for θ³ − 3θ + 1 = 0 (three real roots): three real vertices, crunodes', () => {
+    // N(X + θY + θ²Z) = det(X·I + Y·A + Z·A²), A the companion matrix of θ³ − 3θ + 1 (common practice:
+    // the norm as the determinant of the regular representation; the determinant was expanded with
+    // PARI/GP matdet once, as input data).
+    const f = F('X^3 + 6X^2Z - 3XY^2 + 3XYZ + 9XZ^2 - Y^3 + 3YZ^2 + Z^3');
+    const s = cubicSingularPoints(f);
+    expect(s.components.shape).toBe('three conjugate lines');
+    expect(s.points.length).toBe(3);
+    expect(s.points.every((p) => p.real && p.realKind === 'crunode')).toBe(true);
+  });
+});
+
 describe('smooth and degenerate input', () => {
   it('a smooth cubic has no singular point and Σ τ = 0', () => {
     const s = cubicSingularPoints(F('y^2 + 3xy = x^3 - 7x + 11'));
@@ -134,6 +147,8 @@ describe('smooth and degenerate input', () => {
     expect(s.components.shape).toBe('three conjugate lines');
     expect(s.points.length).toBe(3);
     expect(s.points.filter((p) => p.real).length).toBe(1);
+    // The real vertex is the meet of the two complex conjugate lines: an isolated real point.
+    expect(s.points.find((p) => p.real)!.realKind).toBe('acnode');
     expect(s.tjurinaTotal).toBe(3);
   });
 });
