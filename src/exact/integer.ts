@@ -55,8 +55,10 @@ export function bitLength(a: bigint): number {
 export function isqrt(n: bigint): bigint {
   if (n < 0n) throw new RangeError('isqrt of a negative number');
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  if (x === 0n || !Number.isFinite(Number(n))) x = 1n << BigInt((bitLength(n) >> 1) + 1);
+  // A float start when n is inside the double range, else a power of two above the root.
+  const approx = Number(n);
+  let x = Number.isFinite(approx) ? BigInt(Math.floor(Math.sqrt(approx))) : 0n;
+  if (x === 0n) x = 1n << BigInt((bitLength(n) >> 1) + 1);
   for (;;) {
     const y = (x + n / x) >> 1n;
     if (y >= x) {
