@@ -19,20 +19,37 @@ function trim(p: number[]): ModPoly {
   return p;
 }
 
+/**
+ * x mod l in [0, l) for integers |x| < 2^53, by a multiply and floor instead of the double % (a slow runtime
+ * call in V8): the float quotient is off by at most one, and q·l is exact, so one correction step suffices.
+ */
+export function modReduce(x: number, l: number): number {
+  let r = x - Math.floor(x / l) * l;
+  if (r < 0) r += l;
+  else if (r >= l) r -= l;
+  return r;
+}
+
 function mulMod(a: number, b: number, l: number): number {
-  return (a * b) % l;
+  return modReduce(a * b, l);
 }
 
 /** a^-1 mod l by the extended Euclidean algorithm; assumes gcd(a, l) = 1. */
 function invMod(a: number, l: number): number {
-  let [r0, r1] = [a, l];
-  let [s0, s1] = [1, 0];
+  let r0 = a;
+  let r1 = l;
+  let s0 = 1;
+  let s1 = 0;
   while (r1 !== 0) {
     const q = Math.floor(r0 / r1);
-    [r0, r1] = [r1, r0 - q * r1];
-    [s0, s1] = [s1, s0 - q * s1];
+    const r2 = r0 - q * r1;
+    r0 = r1;
+    r1 = r2;
+    const s2 = s0 - q * s1;
+    s0 = s1;
+    s1 = s2;
   }
-  return ((s0 % l) + l) % l;
+  return modReduce(s0, l);
 }
 
 export function modPolyReduce(p: readonly bigint[], l: number): ModPoly {
@@ -58,7 +75,8 @@ export function modPolyRem(a: readonly number[], b: readonly number[], l: number
   for (let k = r.length - 1; k >= db; k--) {
     const c = mulMod(r[k], inv, l);
     if (c === 0) continue;
-    for (let j = 0; j <= db; j++) r[k - db + j] = (r[k - db + j] - mulMod(c, b[j], l) + l) % l;
+    const base = k - db;
+    for (let j = 0; j <= db; j++) r[base + j] = modReduce(r[base + j] - c * b[j], l);
   }
   r.length = Math.min(r.length, db);
   return trim(r);
