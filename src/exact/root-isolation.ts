@@ -13,7 +13,7 @@
 import { InvalidInput } from './errors.ts';
 import { bitLength } from './integer.ts';
 import { rat, ratCmp, type Rational } from './rational.ts';
-import { RootRefiner, upolyEvalDyadic, type RootInterval } from './root-refine.ts';
+import { RootRefiner, type RootInterval } from './root-refine.ts';
 import {
   upolyDerivative, upolyReflect, upolySignAt, upolySquarefreePart, upolyTaylorShift1InPlace,
 } from './upoly.ts';
@@ -188,4 +188,3 @@ export function upolyRefineRoot(p: readonly bigint[], interval: RootInterval, wi
   return r.interval();
 }
 
-export { upolyEvalDyadic };
