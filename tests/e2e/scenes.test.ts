@@ -159,6 +159,7 @@ describe('scenes in the page', () => {
       const file = JSON.parse(demo('group-law.json'));
       const payloads = ['<script>window.__pwned = 1</script>', '<img src=x onerror="window.__pwned = 2">', '<svg onload="window.__pwned = 3"></svg>'];
       file.title = '<img src=x onerror="window.__pwned = 4">';
+      file.notes = '<script>window.__pwned = 5</script> and <b>bold</b>';
       payloads.forEach((p, k) => (file.objects[k + 1].label = p));
       await openText(page, 'hostile.json', JSON.stringify(file));
       await page.waitForFunction(() => (window as any).__ninefold.doc().objects.some((o: any) => o.label.startsWith('<script>')));
@@ -184,6 +185,14 @@ describe('scenes in the page', () => {
       expect(seen.images).toBe(0);
       for (const p of payloads) expect(seen.texts.some((t) => t.includes(p)), p).toBe(true);
       expect(await page.locator('nf-scene-file input.title').inputValue()).toBe(file.title);
+      expect(await page.locator('nf-scene-file textarea').inputValue()).toBe(file.notes);
+      // The title and notes come back after a reload, with the construction.
+      await page.waitForTimeout(400);
+      await page.reload();
+      await page.waitForFunction(() => (window as any).__ninefold?.doc()?.objects?.some((o: any) => o.label.startsWith('<script>')));
+      await expect.poll(() => page.locator('nf-scene-file input.title').inputValue(), { timeout: 10_000 }).toBe(file.title);
+      expect(await page.locator('nf-scene-file textarea').inputValue()).toBe(file.notes);
+      expect(await page.evaluate(() => (window as any).__pwned ?? null)).toBeNull();
     } finally {
       await page.close();
     }

@@ -31,6 +31,9 @@ export class NfSceneFile extends LitElement {
       .refusal b { color: var(--fails); }
       .drop { position: fixed; inset: 0; display: grid; place-items: center; background: rgba(251, 248, 241, 0.86); border: 4px dashed var(--accent); font-size: 18px; z-index: 50; pointer-events: none; }
       input[type='file'] { display: none; }
+      .notes { margin-top: 4px; }
+      .notes summary { cursor: pointer; color: var(--ink-soft); }
+      textarea { width: 100%; box-sizing: border-box; font: inherit; border: 1px solid var(--rule); border-radius: 4px; }
     `,
   ];
 
@@ -106,6 +109,11 @@ export class NfSceneFile extends LitElement {
     sceneOpen(demoScene(file));
   }
 
+  private onNotes(e: Event): void {
+    const notes = (e.target as HTMLTextAreaElement).value.slice(0, 20_000);
+    $sceneMeta.set({ ...$sceneMeta.get(), notes });
+  }
+
   private onTitle(e: Event): void {
     const title = (e.target as HTMLInputElement).value.slice(0, 400);
     $sceneMeta.set({ ...$sceneMeta.get(), title });
@@ -149,6 +157,10 @@ export class NfSceneFile extends LitElement {
           ${DEMO_SCENES.map((d) => html`<option value=${d.file} title=${d.shows}>${d.title}</option>`)}
         </select>
       </div>
+      <details class="notes">
+        <summary>Notes</summary>
+        <textarea aria-label="Scene notes" rows="4" maxlength="20000" .value=${this.meta.value.notes} @change=${this.onNotes}></textarea>
+      </details>
       ${r
         ? html`<div class="refusal" role="alert" data-where=${r.where}><b>Not opened:</b> ${r.file}: ${r.message}${r.where ? html` <i>(at ${r.where})</i>` : ''}. The open scene is unchanged.</div>`
         : ''}
