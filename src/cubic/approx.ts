@@ -61,5 +61,4 @@ export function polyRootsApprox(coeffs: readonly number[]): C[] {
   return z;
 }
 
-export { cmul, cdiv };
 export type { C as ComplexNumber };

@@ -10,7 +10,7 @@
 // directions. For a cubic and m = 2, C(X) ∝ Xᵀ Hess(P) X (MATH.md).
 import { InvalidInput } from '../exact/errors.ts';
 import { isqrt, isSquare } from '../exact/integer.ts';
-import { det3, triple, type Line, type Point } from '../plane/point.ts';
+import { triple, type Line, type Point } from '../plane/point.ts';
 import { formEval, formPartial, formPrimitive, monomials, type Form } from '../poly/form.ts';
 import { formOnLine } from '../poly/substitute.ts';
 
@@ -137,9 +137,3 @@ function crossLineRaw(a: readonly bigint[], b: readonly bigint[]): bigint[] {
 export function binaryCubicDiscriminant([a, b, c, d]: readonly bigint[]): bigint {
   return b * b * c * c - 4n * a * c * c * c - 4n * b * b * b * d - 27n * a * a * d * d + 18n * a * b * c * d;
 }
-
-/** det(P, D1, D2) ≠ 0: the pencil basis really spans a line missing P (an internal sanity check). */
-export function pencilIsValid(p: Point, d1: Point, d2: Point): boolean {
-  return det3(p, d1, d2) !== 0n;
-}
-

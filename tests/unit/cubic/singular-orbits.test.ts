@@ -10,7 +10,6 @@ import { formToText } from '../../../src/poly/print.ts';
 import { formSingularPoints } from '../../../src/cubic/singular-general.ts';
 import { conjugateMembers } from '../../../src/cubic/conjugate-points.ts';
 
-type C = [number, number];
 function evalComplex(f: Form, re: readonly number[], im: readonly number[]): number {
   let sr = 0;
   let si = 0;
