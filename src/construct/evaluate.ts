@@ -22,7 +22,13 @@ export interface EvaluateOptions {
   readonly changed?: ReadonlySet<ObjectId>;
   /** Points being dragged, at float positions: they and their dependents become approximate. */
   readonly moving?: ReadonlyMap<ObjectId, PointApprox>;
+  /** Objects whose exact value is left to someone else (a worker): they keep their last value, marked
+   * approximate, or wait, and their dependents follow from that. */
+  readonly defer?: (object: ConstructionObject, doc: ConstructionDoc) => boolean;
 }
+
+/** The message of a value left to the background. */
+export const DEFERRED_MESSAGE = 'being computed in the background';
 
 /** Everything an evaluator sees: the object, its parents' values (none failed) and their labels. */
 export interface EvalInput {
@@ -53,6 +59,11 @@ export function constructionEvaluate(doc: ConstructionDoc, opts: EvaluateOptions
       continue;
     }
     dirty.add(id);
+    if (opts.defer?.(object, doc) && !opts.moving?.size) {
+      const prev = opts.previous?.get(id);
+      values.set(id, prev && prev.type !== 'failure' ? staleValue({ object, parents: [], labels: [], params: {}, previous: prev }, 'approximate') : { type: 'failure', message: DEFERRED_MESSAGE, where: id });
+      continue;
+    }
     values.set(id, evaluateOne(object, values, labels, opts));
   }
   return values;

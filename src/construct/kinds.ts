@@ -49,3 +49,17 @@ export const KINDS: Readonly<Record<ConstructionKind, KindSpec>> = {
 export function kindIsKnown(kind: string): kind is ConstructionKind {
   return Object.prototype.hasOwnProperty.call(KINDS, kind);
 }
+
+/**
+ * Is this object heavy enough to compute off the page's thread? Meets of two curves (resultants of
+ * degree up to 36) and multiples nP with |n| above 64 (heights grow like n²). `types` gives the types of
+ * the parents.
+ */
+export function kindIsHeavy(kind: ConstructionKind, parentTypes: readonly ObjectType[], params: Readonly<Record<string, string>>): boolean {
+  if (kind === 'point-meet') return parentTypes[0] === 'curve' && parentTypes[1] === 'curve';
+  if (kind === 'point-multiple') {
+    const n = Number(params.n);
+    return !Number.isFinite(n) || Math.abs(n) > 64;
+  }
+  return false;
+}

@@ -157,8 +157,22 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
         labelItems.push({ kind: 'label', x: 0.8 * seg[2] + 0.2 * seg[0] + 5 * px, y: 0.8 * seg[3] + 0.2 * seg[1] + 5 * px, text: o.label, style: labelStyle(styles, o.style.colour) });
       }
     } else if (v.type === 'point') {
-      const a = v.approx;
-      if (!a.finite || a.x < box.xmin - 1 || a.x > box.xmax + 1 || a.y < box.ymin - 1 || a.y > box.ymax + 1) continue;
+      let a = v.approx;
+      let atInfinity = false;
+      if (!a.finite) {
+        // Shown at the edge of the view, in its direction (the one with y > 0, or x > 0 when y = 0).
+        const flip = a.y < 0 || (a.y === 0 && a.x < 0) ? -1 : 1;
+        const dx = flip * a.x;
+        const dy = flip * a.y;
+        const inset = 16 * px;
+        const tx = dx === 0 ? Infinity : (dx > 0 ? box.xmax - inset - view.cx : box.xmin + inset - view.cx) / dx;
+        const ty = dy === 0 ? Infinity : (box.ymax - inset - view.cy) / dy;
+        const t = Math.min(tx, ty);
+        if (!Number.isFinite(t)) continue;
+        a = { x: view.cx + t * dx, y: view.cy + t * dy, finite: true };
+        atInfinity = true;
+      }
+      if (a.x < box.xmin - 1 || a.x > box.xmax + 1 || a.y < box.ymin - 1 || a.y > box.ymax + 1) continue;
       const helper = o.helperOf !== undefined;
       const r = helper ? 3 : 4.5;
       if (highlighted) {
@@ -177,7 +191,11 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
             ? style(o.style.colour, 2, 'none', r)
             : style(o.style.colour, 1.75, 'none', r + 0.5, [2.5, 2]);
       pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
-      if (o.style.showLabel) labelItems.push({ kind: 'label', x: a.x + 7 * px, y: a.y + 7 * px, text: o.label, style: labelStyle(styles, '#1e1c18'), owner: o.id });
+      if (o.style.showLabel || atInfinity) {
+        const text = atInfinity ? `${o.label} at ∞` : o.label;
+        const x = atInfinity && a.x > view.cx ? a.x - (8 * text.length + 12) * px : a.x + 7 * px;
+        labelItems.push({ kind: 'label', x, y: a.y + (atInfinity ? -14 : 7) * px, text, style: labelStyle(styles, '#1e1c18'), owner: o.id });
+      }
     }
   }
   if (extras.blowup) {

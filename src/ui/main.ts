@@ -2,7 +2,8 @@
 // a small hook for the browser tests (window.__ninefold).
 import { constructionEmpty, constructionObject, constructionValidate } from '../construct/graph.ts';
 import type { ObjectValue } from '../construct/types.ts';
-import { $doc, $history, $values, docReset } from './stores/construction.ts';
+import { $doc, $history, $values, docBackgroundInstall, docReset } from './stores/construction.ts';
+import { workerBackground } from './evaluate-client.ts';
 import { $selection, $tool, $view, noticeShow, worldToScreen } from './stores/interaction.ts';
 import { $search } from './stores/search.ts';
 import { STORAGE_KEY, persistRestore, persistSave } from './persist.ts';
@@ -13,6 +14,7 @@ import './scene-file/wire.ts'; // E8 wiring: scene panel (file, figure, trials) 
 
 function start(): void {
   document.body.style.margin = '0';
+  docBackgroundInstall(workerBackground);
   const width = Math.max(200, window.innerWidth - 550);
   const height = Math.max(200, window.innerHeight - 44);
   $view.set({ ...$view.get(), width, height });

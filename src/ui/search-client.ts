@@ -26,7 +26,7 @@ function searchReply(r: JobReply): void {
   else if (r.kind === 'found') {
     $search.set({ ...s, phase: 'done', progress: 1, points: r.points, note: r.note });
     noticeShow('done', `Search done: ${r.points.length} point${r.points.length === 1 ? '' : 's'} of height ≤ ${s.height}.`, 'search');
-  } else {
+  } else if (r.kind === 'error') {
     $search.set({ ...s, phase: 'failed', note: r.message });
     noticeShow('error', r.message, 'search');
   }

@@ -5,9 +5,15 @@ import { formFromCoeffs, monomialCount } from '../poly/form.ts';
 import { pointToString } from '../plane/parse-point.ts';
 import { cubicRationalPoints } from '../cubic/search.ts';
 import type { JobReply, JobRequest } from './jobs.ts';
+import { constructionEvaluate } from '../construct/evaluate.ts';
+import { constructionValidate } from '../construct/graph.ts';
 
 export function jobRun(req: JobRequest, post: (reply: JobReply) => void): void {
   try {
+    if (req.kind === 'evaluate') {
+      post({ kind: 'values', job: req.job, values: constructionEvaluate(constructionValidate(req.doc)) });
+      return;
+    }
     const n = req.coeffs.length;
     const degree = [1, 2, 3, 4, 5, 6].find((d) => monomialCount(d) === n);
     if (degree === undefined) throw new NinefoldError(`a curve with ${n} coefficients has no degree`, 'curve');
@@ -30,6 +36,6 @@ export function jobRun(req: JobRequest, post: (reply: JobReply) => void): void {
     post({ kind: 'found', job: req.job, points: r.points.map(pointToString), note: r.note, complete: r.complete });
   } catch (e) {
     if (e instanceof NinefoldError) post({ kind: 'error', job: req.job, message: e.message, where: e.where });
-    else post({ kind: 'error', job: req.job, message: `the search stopped: ${(e as Error).message}`, where: 'search' });
+    else post({ kind: 'error', job: req.job, message: `the ${req.kind === 'search' ? 'search' : 'computation'} stopped: ${(e as Error).message}`, where: req.kind });
   }
 }

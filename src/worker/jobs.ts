@@ -1,8 +1,10 @@
-// The messages between the page and the job worker. Plain data only (structured clone): bigints travel
-// as strings, points as "X:Y:Z".
+// The messages between the page and the job worker. Plain data only (structured clone keeps bigints,
+// maps and arrays); points as "X:Y:Z" in search replies.
 //
-// Cancellation is by ending the worker (the page then starts a fresh one): the search is synchronous
-// inside the worker, so a message could not interrupt it, and ending it frees the thread at once.
+// Cancellation is by ending the worker (the page then starts a fresh one): jobs are synchronous inside
+// the worker, so a message could not interrupt them, and ending it frees the thread at once.
+import type { ConstructionDoc, ObjectId, ObjectValue } from '../construct/types.ts';
+
 export interface SearchRequest {
   readonly kind: 'search';
   readonly job: number;
@@ -13,9 +15,17 @@ export interface SearchRequest {
   readonly box: { readonly xmin: string; readonly xmax: string; readonly ymin: string; readonly ymax: string } | null;
 }
 
-export type JobRequest = SearchRequest;
+/** Evaluate a whole construction exactly (its heavy objects included). */
+export interface EvaluateRequest {
+  readonly kind: 'evaluate';
+  readonly job: number;
+  readonly doc: ConstructionDoc;
+}
+
+export type JobRequest = SearchRequest | EvaluateRequest;
 
 export type JobReply =
   | { readonly kind: 'progress'; readonly job: number; readonly done: number; readonly total: number }
   | { readonly kind: 'found'; readonly job: number; readonly points: readonly string[]; readonly note: string; readonly complete: boolean }
+  | { readonly kind: 'values'; readonly job: number; readonly values: ReadonlyMap<ObjectId, ObjectValue> }
   | { readonly kind: 'error'; readonly job: number; readonly message: string; readonly where: string };

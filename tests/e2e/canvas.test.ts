@@ -215,6 +215,28 @@ describe('canvas app (e2e)', () => {
     });
   }, 90_000);
 
+  it('meets two curves in the background worker and shows every real meet point (rational ones exactly)', async () => {
+    await withPage(async (page) => {
+      await typeCurve(page, E);
+      await typeCurve(page, 'x^2 + y^2 = 8'); // meets E at (2, ±2) and (-2, ±2) among others
+      await tool(page, 'meet');
+      await clickWorld(page, 2 * Math.SQRT2, 0); // on the circle
+      await clickWorld(page, -2.3830, 0); // E crosses y = 0 near x = -2.383
+      expect(await notice(page)).not.toMatch(/needs/);
+      await page.waitForFunction(() => {
+        const h = (window as unknown as { __ninefold: { doc(): { objects: { id: string; construction: { kind: string } }[] }; value(id: string): { type: string; status?: string } } }).__ninefold;
+        const meets = h.doc().objects.filter((o) => o.construction.kind === 'point-meet');
+        return meets.length > 0 && meets.every((o) => h.value(o.id).type === 'point');
+      }, undefined, { timeout: 30_000 });
+      const exact = await page.evaluate(() => {
+        const h = (window as unknown as { __ninefold: { doc(): { objects: { id: string; construction: { kind: string } }[] }; value(id: string): { exact?: string[] } } }).__ninefold;
+        return h.doc().objects.filter((o) => o.construction.kind === 'point-meet').map((o) => h.value(o.id).exact?.join(':'));
+      });
+      expect(exact).toEqual(expect.arrayContaining(['2:2:1', '2:-2:1', '2:2:-1', '2:-2:-1']));
+      await shot(page, '13-curve-meet', true);
+    });
+  }, 90_000);
+
   it('fits the sidebar without overlap at 1920x1080', async () => {
     await withPage(async (page) => {
       await typeCurve(page, E);

@@ -7,11 +7,18 @@ import { NinefoldError, ParseError } from '../../exact/errors.ts';
 import { formParse } from '../../poly/parse.ts';
 import { formToText } from '../../poly/print.ts';
 import { constructionAdd, constructionObject } from '../../construct/graph.ts';
-import type { ConstructionKind, CurveValue } from '../../construct/types.ts';
+import type { ConstructionDoc, ConstructionKind, CurveValue } from '../../construct/types.ts';
 import { $doc, $values, docCommit } from '../stores/construction.ts';
 import { $selection, noticeShow } from '../stores/interaction.ts';
 import { curveReportText, type ReportLine } from '../report.ts';
 import { theme } from './theme.ts';
+
+/** Curves take the colours in turn, so two curves on the canvas are told apart at a glance. */
+const CURVE_COLOURS = ['#1f5fa8', '#8a3b8f', '#2f7d4a', '#b5651d', '#4a4a86', '#8f2d2d'];
+
+function curveColour(doc: ConstructionDoc): string {
+  return CURVE_COLOURS[doc.objects.filter((o) => o.type === 'curve').length % CURVE_COLOURS.length];
+}
 
 @customElement('nf-curve-panel')
 export class NfCurvePanel extends LitElement {
@@ -96,7 +103,7 @@ ${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
     const text = input.value;
     try {
       const parsed = formParse(text, 'equation');
-      const r = constructionAdd(this.doc.value, { construction: { kind: 'curve-equation', parents: [], params: { equation: text } } });
+      const r = constructionAdd(this.doc.value, { construction: { kind: 'curve-equation', parents: [], params: { equation: text } }, style: { colour: curveColour(this.doc.value) } });
       docCommit({ ...r.doc, activeCurve: r.id });
       this.error = null;
       input.value = '';
@@ -116,7 +123,7 @@ ${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
       return;
     }
     try {
-      const r = constructionAdd(doc, { construction: { kind, parents: sel, params: kind === 'pencil-member' ? { member: '1:0' } : {} } });
+      const r = constructionAdd(doc, { construction: { kind, parents: sel, params: kind === 'pencil-member' ? { member: '1:0' } : {} }, style: { colour: curveColour(doc) } });
       docCommit({ ...r.doc, activeCurve: r.id });
       const v = $values.get().get(r.id);
       if (v?.type === 'failure') noticeShow('error', v.message, 'equation');

@@ -6,7 +6,8 @@
 import { atom, computed } from 'nanostores';
 import { constructionEvaluate } from '../../construct/evaluate.ts';
 import { constructionEmpty } from '../../construct/graph.ts';
-import type { ConstructionDoc, ObjectId, ObjectValue, PointApprox } from '../../construct/types.ts';
+import type { ConstructionDoc, ConstructionObject, ObjectId, ObjectValue, PointApprox } from '../../construct/types.ts';
+import { kindIsHeavy } from '../../construct/kinds.ts';
 import { historyPush, historyRedo, historyStart, historyUndo, type History } from '../history.ts';
 
 export const $history = atom<History<ConstructionDoc>>(historyStart(constructionEmpty()));
@@ -17,6 +18,20 @@ export const $canRedo = computed($history, (h) => h.future.length > 0);
 
 let evaluatedDoc: ConstructionDoc | null = null;
 
+/** Computes a whole document exactly somewhere else (the page installs a worker) and calls back. */
+export type Background = (doc: ConstructionDoc, done: (values: ReadonlyMap<ObjectId, ObjectValue>) => void) => void;
+let background: Background | null = null;
+
+/** Heavy objects go to the background when one is installed (tests and the CLI compute everything here). */
+export function docBackgroundInstall(b: Background | null): void {
+  background = b;
+}
+
+function heavy(o: ConstructionObject, doc: ConstructionDoc): boolean {
+  const types = o.construction.parents.map((p) => doc.objects.find((q) => q.id === p)?.type ?? 'point');
+  return kindIsHeavy(o.construction.kind, types, o.construction.params);
+}
+
 /** Ids whose entries differ between two documents (new or changed objects). */
 export function docChanged(before: ConstructionDoc | null, after: ConstructionDoc): Set<ObjectId> {
   const old = new Map((before?.objects ?? []).map((o) => [o.id, o]));
@@ -26,8 +41,16 @@ export function docChanged(before: ConstructionDoc | null, after: ConstructionDo
 function evaluate(doc: ConstructionDoc, moving?: ReadonlyMap<ObjectId, PointApprox>): void {
   const changed = docChanged(evaluatedDoc, doc);
   const previous = evaluatedDoc ? $values.get() : undefined;
-  $values.set(constructionEvaluate(doc, { ...(previous ? { previous, changed } : {}), ...(moving ? { moving } : {}) }));
+  const defer = background ? heavy : undefined;
+  const values = constructionEvaluate(doc, { ...(previous ? { previous, changed } : {}), ...(moving ? { moving } : {}), ...(defer ? { defer } : {}) });
+  $values.set(values);
   evaluatedDoc = doc;
+  if (background && doc.objects.some((o) => changed.has(o.id) && heavy(o, doc))) {
+    background(doc, (exact) => {
+      // Only the document still open gets the answer; a later commit has asked again.
+      if ($history.get().present === doc && evaluatedDoc === doc) $values.set(exact);
+    });
+  }
 }
 
 /** Make `next` the present (one undo step) and recompute what changed. */
