@@ -157,7 +157,8 @@ export function upolySquarefreeRationalRoots(f: readonly bigint[], options: Rati
         const { m, k } = r.midpoint();
         cand = ratLastConvergent(m, 1n << BigInt(k), denBound);
       }
-      if (isRootOf(g, cand)) {
+      // The candidate must be this interval's root: a convergent can also be a neighbouring root.
+      if (r.contains(cand) && isRootOf(g, cand)) {
         found.push(cand);
         count++;
         open.splice(i--, 1);
@@ -212,11 +213,9 @@ function floatCandidateRoots(g: readonly bigint[]): Rational[] {
     // A non-zero rational with denominator <= 2^40 has modulus >= 2^-40; g(0) != 0, so tinier x propose nothing.
     if (!Number.isFinite(x) || Math.abs(x) < 2 ** -60 || !(Math.abs(im[i]) <= 1e-6 * Math.abs(x))) continue;
     const { m, k } = dyadicOfDouble(x);
+    // Every convergent is tried (the first root met may be a close neighbour already found).
     for (const c of convergents(m, k, cap)) {
-      if (isRootOf(g, c)) {
-        if (!out.some((q) => q.num === c.num && q.den === c.den)) out.push(c);
-        break;
-      }
+      if (!out.some((q) => q.num === c.num && q.den === c.den) && isRootOf(g, c)) out.push(c);
     }
   }
   return out;

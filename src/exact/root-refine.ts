@@ -113,6 +113,13 @@ export class RootRefiner {
     return { lo: rat(this.a, den), hi: rat(this.b, den) };
   }
 
+  /** Is q in the closed bracket? */
+  contains(q: Rational): boolean {
+    if (this.exact) return ratCmp(q, this.exact) === 0;
+    const x = q.num << BigInt(this.k);
+    return this.a * q.den <= x && x <= this.b * q.den;
+  }
+
   /** A point of the bracket (its midpoint) as a dyadic m/2^k. */
   midpoint(): { m: bigint; k: number } {
     return { m: this.a + this.b, k: this.k + 1 };

@@ -6,7 +6,7 @@ import {
   algebraicRefine, algebraicSign, algebraicToDecimal, algebraicToNumber, type RealAlgebraic,
 } from '../../../src/exact/algebraic.ts';
 import { rat, ratCmp, ratSub } from '../../../src/exact/rational.ts';
-import { upolyMul } from '../../../src/exact/upoly.ts';
+import { upolyMul, upolySignAt } from '../../../src/exact/upoly.ts';
 import { InvalidInput } from '../../../src/exact/errors.ts';
 
 const sqrt = (n: bigint): RealAlgebraic => algebraicRealRoots([-n, 0n, 1n]).at(-1)!;
@@ -76,6 +76,31 @@ describe('real algebraic numbers', () => {
     expect(algebraicToNumber(algebraicRealRoots([-(10n ** 801n), 0n, 1n]).at(-1)!)).toBe(Infinity);
     expect(algebraicToNumber(algebraicRealRoots([-(10n ** 801n), 0n, 1n])[0])).toBe(-Infinity);
     expect(algebraicToNumber(algebraicRealRoots([-1n, 0n, 10n ** 801n]).at(-1)!)).toBe(0);
+  });
+  it('30-digit decimals of roots spanning 1e-26..1e101 lie within half a unit of the root (exact sign check)', () => {
+    // A sextic on which PARI's polrootsreal at realprecision 100 was wrong in the 9th digit (see the reference test).
+    const p = [
+      70214106703340291453709298207830355886204523844498675215839001389101n, -303206851925816032091321291415148476215n,
+      -317538510223520930328963357612386660714599349245686717637674674136296981155509324727842759995482626411238113536398511568n,
+      -3627521905146n, -433851945545115n,
+      8488233952358437094473541686722174305163275673797455580158579091704509328373098070023968262416155284094818n, 58045n,
+    ];
+    const roots = algebraicRealRoots(p);
+    expect(roots.length).toBe(4);
+    for (const a of roots) {
+      const text = algebraicToDecimal(a, 30);
+      const [mant, ex] = text.includes('e') ? text.split('e') : [text, '0'];
+      const digits = mant.replace('-', '').replace('.', '');
+      const pointAt = mant.replace('-', '').indexOf('.');
+      const exp10 = Number(ex) - (digits.length - (pointAt < 0 ? digits.length : pointAt));
+      const sign = mant.startsWith('-') ? -1n : 1n;
+      // [D − u/2, D + u/2] with u one unit of the last digit, as exact rationals over 2·10^k.
+      const scale = exp10 >= 0 ? [10n ** BigInt(exp10), 1n] : [1n, 10n ** BigInt(-exp10)];
+      const D2 = 2n * sign * BigInt(digits);
+      const lo = rat((D2 - 1n) * scale[0], 2n * scale[1]);
+      const hi = rat((D2 + 1n) * scale[0], 2n * scale[1]);
+      expect(upolySignAt(p, lo) * upolySignAt(p, hi), text).toBe(-1);
+    }
   });
   it('refuses bad input', () => {
     expect(() => algebraicFromInterval([-2n, 0n, 1n], rat(2n), rat(3n))).toThrow(InvalidInput);

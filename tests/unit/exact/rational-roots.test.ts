@@ -74,6 +74,17 @@ describe('upolyRationalRoots', () => {
       { numRuns: 60 },
     );
   });
+  it('a close neighbour that is also a root is not taken for this root (regression: 16/719 and 16000017/719000719)', () => {
+    const rs = [
+      { root: rat(16n, 719n), multiplicity: 1 },
+      { root: rat(16000017n, 719000719n), multiplicity: 1 },
+    ];
+    const p = upolyMul(upolyFromRationalRoots(rs), [2n, 0n, 1n]);
+    expect(upolyRationalRoots(p)).toEqual(expected(rs));
+    expect(upolyRationalRoots(p, { floatCandidates: false })).toEqual(expected(rs));
+    const q = upolyMul(upolyFromRationalRoots([{ root: rat(16n, 719n), multiplicity: 2 }, rs[1]]), [3n, 0n, 1n]);
+    expect(upolyRationalRoots(q, { floatCandidates: false })).toEqual(expected([{ root: rat(16n, 719n), multiplicity: 2 }, rs[1]]));
+  });
   it('roots beyond the double range, tiny and huge (found by the exact steps)', () => {
     const tiny = upolyMul([-1n, 10n ** 330n], [1n, 0n, 1n]);
     expect(upolyRationalRoots(tiny)).toEqual([{ root: rat(1n, 10n ** 330n), multiplicity: 1 }]);
