@@ -164,6 +164,24 @@ describe('canvas app (e2e)', () => {
       const rows = await page.locator('nf-search tbody tr').count();
       expect(rows).toBeGreaterThanOrEqual(9); // (0:1:0) and the eight small affine points at least
       await shot(page, '08-search-done', true);
+      // A region drawn on the canvas around x in [0.5, 2.5], y in [0.5, 2.5] keeps (1, 1) and (2, 2) only.
+      await page.locator('nf-search button', { hasText: 'Draw region' }).click();
+      const [rx0, ry0] = await worldToPage(page, 0.5, 2.5);
+      const [rx1, ry1] = await worldToPage(page, 2.5, 0.5);
+      await page.mouse.move(rx0, ry0);
+      await page.mouse.down();
+      await page.mouse.move(rx1, ry1, { steps: 5 });
+      await page.mouse.up();
+      await page.locator('nf-search button.start').click();
+      await page.waitForFunction(() => (window as unknown as { __ninefold: { search(): { phase: string } } }).__ninefold.search().phase === 'done', undefined, { timeout: 30_000 });
+      const inside = await page.evaluate(() => (window as unknown as { __ninefold: { search(): { points: string[] } } }).__ninefold.search().points);
+      expect(inside.length).toBeGreaterThanOrEqual(2);
+      expect(inside).toEqual(expect.arrayContaining(['1:1:1', '2:2:1']));
+      for (const q of inside) {
+        const [x, y, z] = q.split(':').map(Number);
+        expect(x / z >= 0.5 && x / z <= 2.5 && y / z >= 0.5 && y / z <= 2.5).toBe(true);
+      }
+      await shot(page, '08a-search-region');
     });
   }, 90_000);
 
@@ -183,6 +201,19 @@ describe('canvas app (e2e)', () => {
       expect(await objectCount(page)).toBe(2);
       await page.getByRole('button', { name: 'Redo' }).click();
       await page.getByRole('button', { name: 'Redo' }).click();
+      expect(await objectCount(page)).toBe(4);
+      // Deleting a point with a line built from it asks first, naming the dependents.
+      const [, a] = await labels(page);
+      await selectInList(page, a);
+      await page.locator('nf-objects button', { hasText: 'Delete selected' }).click();
+      expect(await page.locator('nf-objects .confirm').textContent()).toMatch(/Delete A and the 1 object built from it \(l1\)/);
+      await shot(page, '09a-delete-asks');
+      await page.locator('nf-objects .confirm button.no').click();
+      expect(await objectCount(page)).toBe(4);
+      await page.locator('nf-objects button', { hasText: 'Delete selected' }).click();
+      await page.locator('nf-objects .confirm button.yes').click();
+      expect(await objectCount(page)).toBe(2);
+      await page.getByRole('button', { name: 'Undo' }).click();
       expect(await objectCount(page)).toBe(4);
       await page.waitForTimeout(400); // the autosave runs 150 ms after a change
       await page.reload();
