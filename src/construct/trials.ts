@@ -10,7 +10,8 @@
 //                    conic, the second meet of a random line through a known rational point of it
 //                    (F(λP + μD) = μ(λ D·∇F(P) + μ F(D)) when F(P) = 0); on a cubic, a random chord-and-
 //                    tangent walk from the rational points of it the construction already holds
-//                    (Silverman–Tate, ch. I: P*Q is rational when P, Q are). Where none can be made
+//                    (Silverman–Tate, ch. I: P*Q is rational when P, Q are), or, when the scene holds
+//                    none, from the points of small height the point search finds. Where none can be made
 //                    (no known rational point, degree > 3) it becomes the real algebraic point of the
 //                    curve over a random rational abscissa near its own; checks on it are then decided
 //                    only as the evaluator can on algebraic data (often 'undecided'), and the report says so.
@@ -23,6 +24,7 @@ import { formEval, formGradientAt, type Form } from '../poly/form.ts';
 import { cross, dot, triple, tripleIsZero, type Point } from '../plane/point.ts';
 import { pointParse, pointToString } from '../plane/parse-point.ts';
 import { cubicThirdPoint } from '../cubic/chord.ts';
+import { cubicRationalPoints } from '../cubic/search.ts';
 import { constructionEvaluate } from './evaluate.ts';
 import type { CheckValue, ConstructionDoc, ConstructionObject, ObjectId, ObjectValue } from './types.ts';
 
@@ -81,6 +83,8 @@ const REDRAW_ATTEMPTS = 25;
 /** Points of a chord walk with larger coordinates are not reused: they would only slow the trials. */
 const POOL_BITS = 256;
 const POOL_SIZE = 200;
+/** Height of the point search that seeds a cubic with no rational point in the scene (a few ms). */
+const SEED_HEIGHT = 30;
 
 /** Run the trials. A construction with no checks gives an empty list; one with no free point repeats itself. */
 export function constructionTrials(doc: ConstructionDoc, opts: TrialOptions = {}): TrialReport {
@@ -166,7 +170,12 @@ function instanceDraw(
         continue;
       } else redrawn[o.id] = 'kept in place';
     }
-    objects.push(at === null ? o : { ...o, construction: { ...c, params: { ...c.params, at } } });
+    if (at === null) objects.push(o);
+    else {
+      // A place "at" replaces any other way of placing the point (x or y with near).
+      const { x: _x, y: _y, near: _near, ...rest } = c.params;
+      objects.push({ ...o, construction: { ...c, params: { ...rest, at } } });
+    }
   }
   return { ...doc, objects };
 }
@@ -209,9 +218,21 @@ function poolOf(pools: Map<ObjectId, Point[]>, doc: ConstructionDoc, curve: Obje
         // an unreadable saved place is simply not a seed
       }
     }
+    if (pool.length === 0 && f.degree === 3) pool.push(...searchSeeds(f));
     pools.set(curve, pool);
   }
   return pool;
+}
+
+/** Smooth rational points of small height found by the point search, when the scene holds none. */
+function searchSeeds(f: Form): Point[] {
+  try {
+    const found = cubicRationalPoints(f, { height: SEED_HEIGHT }).points;
+    return found.filter((p) => !tripleIsZero(formGradientAt(f, p))).slice(0, POOL_SIZE);
+  } catch (e) {
+    if (e instanceof NinefoldError) return [];
+    throw e;
+  }
 }
 
 /**

@@ -125,6 +125,20 @@ describe('theorem trials', () => {
   });
 });
 
+describe('trials on a cubic whose points in the scene are not rational', () => {
+  it('seeds the random rational points from the point search', () => {
+    let doc = constructionEmpty();
+    const c = constructionAdd(doc, { construction: { kind: 'curve-equation', parents: [], params: { equation: 'y^2 = x^3 - 7x + 10' } } });
+    // (1/2, y) with y^2 = 53/8: irrational, so the scene offers no rational seed.
+    const p = constructionAdd(c.doc, { construction: { kind: 'point-on-curve', parents: [c.id], params: { x: '1/2', near: '3' } }, label: 'P' });
+    doc = constructionAdd(p.doc, { construction: { kind: 'check-on-curve', parents: [p.id, c.id], params: {} }, label: 'P on E' }).doc;
+    expect(constructionEvaluate(doc).get(p.id)).toMatchObject({ status: 'algebraic' });
+    const r = constructionTrials(doc, { count: 10, seed: 8 });
+    expect(r.redrawn[p.id]).toBe('random rational point of the curve');
+    expect(r.checks[0]).toMatchObject({ held: 10, failed: 0, undecided: 0 });
+  });
+});
+
 describe('the trials job of the page worker', () => {
   it('posts progress with tallies, then the report, all as plain data', async () => {
     const { trialsJobRun } = await import('../../../src/ui/scene-trials/trials-job.ts');
