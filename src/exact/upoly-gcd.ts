@@ -1,7 +1,8 @@
 // gcd, square-free factorisation and resultants of integer polynomials (re-exported by upoly.ts).
 //
-// Canonical form: gcds and square-free factors are primitive (content 1, positive leading coefficient);
-// the gcd of two zero polynomials is [].
+// Canonical form: square-free factors are primitive (content 1, positive leading coefficient). upolyGcd of
+// two non-zero polynomials is gcd(content p, content q) times the primitive gcd, leading coefficient
+// positive; with one argument zero it is the primitive part of the other; gcd(0, 0) = [].
 //
 // Method: a modular filter first — if the images modulo a prime that divides neither leading coefficient
 // are coprime, the integer gcd is the gcd of the contents (the image of the true gcd divides the modular
@@ -61,13 +62,21 @@ function subresultantGcd(a: UPoly, b: UPoly): UPoly {
 export function upolyGcd(p: readonly bigint[], q: readonly bigint[]): UPoly {
   if (p.length === 0) return upolyPrimitive(q);
   if (q.length === 0) return upolyPrimitive(p);
-  const c = gcd(upolyContent(p), upolyContent(q));
+  const cp = upolyContent(p);
+  const cq = upolyContent(q);
+  const c = gcd(cp, cq);
   if (p.length === 1 || q.length === 1) return [c];
-  let a = upolyPrimitive(p);
-  let b = upolyPrimitive(q);
+  const a = dividedBy(p, cp);
+  const b = dividedBy(q, cq);
   if (coprimeByImage(a, b)) return [c];
   const g = upolyGcdModular(a, b);
   return c === 1n ? g : g.map((x) => x * c);
+}
+
+/** p / (±content) with a positive leading coefficient, the content already known (internal: p non-zero). */
+function dividedBy(p: readonly bigint[], content: bigint): UPoly {
+  const s = p[p.length - 1] < 0n ? -content : content;
+  return s === 1n ? p.slice() : p.map((x) => x / s);
 }
 
 /** The same gcd by the sub-resultant PRS alone (no filter, no images): the baseline for tests and benches. */

@@ -143,15 +143,15 @@ export const gcdBench: BenchSuite = {
       return [a, b] as const;
     });
     const gpPairs = `v=[${polyPairs.map(([a, b]) => `[${gpPoly(a)},${gpPoly(b)}]`).join(',')}]; m=#v;`;
-    const gcdOurs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcd(a, b)), 7, 1) / polyPairs.length;
+    const gcdOurs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcd(a, b)), 7, 5) / polyPairs.length;
     const gcdPari = pariMs(gpPairs, 'gcd(v[r%m+1][1], v[r%m+1][2])', 2000);
-    const gcdPrs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcdSubresultant(a, b)), 5, 1) / polyPairs.length;
+    const gcdPrs = medianMs(() => polyPairs.forEach(([a, b]) => upolyGcdSubresultant(a, b)), 5, 5) / polyPairs.length;
     figures.push({
       label: 'gcd of two degree-9 polynomials with a common cubic, 50-digit coefficients (ours: modular; also the sub-resultant PRS)',
       values: { ninefoldMs: gcdOurs, subresultantMs: gcdPrs, pariMs: gcdPari, ratio: gcdOurs / gcdPari, prsOverModular: gcdPrs / gcdOurs },
     });
     const sqfSet = polyPairs.map(([a, b]) => upolyMul(a, upolyGcd(a, b))); // a repeated cubic factor
-    const sqfOurs = medianMs(() => sqfSet.forEach((p) => upolySquarefreeFactorisation(p)), 7, 1) / sqfSet.length;
+    const sqfOurs = medianMs(() => sqfSet.forEach((p) => upolySquarefreeFactorisation(p)), 7, 5) / sqfSet.length;
     const sqfPari = pariMs(`w=[${sqfSet.map(gpPoly).join(',')}]; m=#w;`, 'my(p=w[r%m+1]); gcd(p, deriv(p))', 1000);
     figures.push({ label: 'square-free factorisation, degree 12 with a repeated cubic (PARI: gcd(p, p\'), one step of it)', values: { ninefoldMs: sqfOurs, pariMs: sqfPari, ratio: sqfOurs / sqfPari } });
     const resPairs = Array.from({ length: 20 }, () => [0, 1].map(() => Array.from({ length: 10 }, () => digitsExactly(rand, 50))) as [UPoly, UPoly]);
