@@ -6,6 +6,7 @@
 // algebraic = ring, approximate = dashed ring. Selection = a wide pale halo, hover = a thin dark halo.
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
 import { curvePrepare, curveTrace, type PreparedCurve } from '../../shaders-free-render/trace.ts';
+import { SINK_LOOK } from '../../shaders-free-render/pixi-sink.ts';
 import type { ConstructionDoc, CurveValue, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
 import type { Form } from '../poly/form.ts';
 import { curveLandmarks } from '../poly/curve-landmarks.ts';
@@ -22,7 +23,8 @@ export interface DisplayExtras {
   readonly region?: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number } | null;
 }
 
-export const PAPER = '#fbf8f1';
+/** The sink's paper, so rims and holes of point marks match the background. */
+export const PAPER = SINK_LOOK.background;
 const HALO_SELECT = '#f2c14e';
 const HALO_HOVER = '#2b2b2b';
 
@@ -103,7 +105,6 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
   const pointItems: DisplayItem[] = [];
   const labelItems: DisplayItem[] = [];
 
-  axes(items, styles, box, view);
   if (extras.region) {
     const r = extras.region;
     styles.region = style('#7a6a9c', 1, '#7a6a9c', 0, [6, 4]);
@@ -180,17 +181,22 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
         pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'halo:select', owner: o.id });
       }
       if (hovered) {
-        styles['halo:hover'] = style(HALO_HOVER, 1.5, 'none', r + 4);
-        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'halo:hover', owner: o.id });
+        styles['halo:hover'] = style(HALO_HOVER, 1.5, HALO_HOVER, 0);
+        pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, r + 4, px), closed: true, ends: null, style: 'halo:hover', owner: o.id });
       }
+      // exact: a filled disc with a paper rim; algebraic: a ring; approximate: a dashed ring.
       const key = `point:${v.status}:${o.style.colour}:${r}`;
-      styles[key] =
-        v.status === 'exact'
-          ? style(PAPER, 1.25, o.style.colour, r)
-          : v.status === 'algebraic'
-            ? style(o.style.colour, 2, 'none', r)
-            : style(o.style.colour, 1.75, 'none', r + 0.5, [2.5, 2]);
-      pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
+      if (v.status === 'exact') {
+        styles[key] = style(o.style.colour, 0, o.style.colour, r);
+        styles['point:rim'] = style(PAPER, 1.25, PAPER, 0);
+        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
+        pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, r, px), closed: true, ends: null, style: 'point:rim', owner: o.id });
+      } else {
+        styles[key] = v.status === 'algebraic' ? style(o.style.colour, 2, o.style.colour, 0) : style(o.style.colour, 1.75, o.style.colour, 0, [2.5, 2]);
+        styles['point:hole'] = style(PAPER, 0, PAPER, r - 1);
+        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'point:hole', owner: o.id });
+        pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, v.status === 'algebraic' ? r : r + 0.5, px), closed: true, ends: null, style: key, owner: o.id });
+      }
       if (o.style.showLabel || atInfinity) {
         const text = atInfinity ? `${o.label} at ∞` : o.label;
         const x = atInfinity && a.x > view.cx ? a.x - (8 * text.length + 12) * px : a.x + 7 * px;
@@ -202,21 +208,21 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     const b = extras.blowup;
     styles['blowup:tangent'] = style('#0f6b5c', 1.5, '#0f6b5c', 0, [9, 4]);
     styles['blowup:line'] = style('#0f6b5c', 1.5, '#0f6b5c', 0);
-    styles['blowup:point'] = style('#0f6b5c', 2.5, 'none', 7);
-    styles['blowup:singular'] = style('#0f6b5c', 2, 'none', 10, [3, 2]);
+    styles['blowup:point'] = style('#0f6b5c', 2.5, '#0f6b5c', 0);
+    styles['blowup:singular'] = style('#0f6b5c', 2, '#0f6b5c', 0, [3, 2]);
     for (const t of b.tangents) {
       const seg = lineClip(t, box);
       if (seg) lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: 'blowup:tangent' });
     }
     if (b.singular.finite) {
-      pointItems.push({ kind: 'dot', x: b.singular.x, y: b.singular.y, role: 'point', style: 'blowup:singular' });
+      pointItems.push({ kind: 'polyline', points: ring(b.singular.x, b.singular.y, 10, px), closed: true, ends: null, style: 'blowup:singular' });
       if (b.point?.finite) {
         const l = [b.singular.y - b.point.y, b.point.x - b.singular.x, b.singular.x * b.point.y - b.point.x * b.singular.y];
         const seg = lineClip(l, box);
         if (seg) lineOnTop.push({ kind: 'segment', x0: seg[0], y0: seg[1], x1: seg[2], y1: seg[3], style: 'blowup:line' });
       }
     }
-    if (b.point?.finite) pointItems.push({ kind: 'dot', x: b.point.x, y: b.point.y, role: 'point', style: 'blowup:point' });
+    if (b.point?.finite) pointItems.push({ kind: 'polyline', points: ring(b.point.x, b.point.y, 7, px), closed: true, ends: null, style: 'blowup:point' });
   }
   if (extras.found?.length) {
     styles.found = style('#5d4a8a', 1, '#5d4a8a', 2.5);
@@ -247,28 +253,11 @@ function declutter(labels: DisplayItem[], view: View, selection: ReadonlySet<Obj
   return out;
 }
 
-/** Faint axes with a tick at each unit step that leaves at least 40 pixels between ticks. */
-function axes(items: DisplayItem[], styles: Record<string, ItemStyle>, box: ReturnType<typeof viewBounds>, view: View): void {
-  styles.axis = style('#cfc6b0', 1, '#cfc6b0', 0);
-  styles['axis:label'] = style('#8f8672', 0, '#8f8672', 0, [], 11);
-  const step = 10 ** Math.ceil(Math.log10(40 / view.scale));
-  const tick = 4 / view.scale;
-  if (box.ymin <= 0 && box.ymax >= 0) {
-    items.push({ kind: 'segment', x0: box.xmin, y0: 0, x1: box.xmax, y1: 0, style: 'axis' });
-    for (let x = Math.ceil(box.xmin / step) * step; x <= box.xmax; x += step) {
-      if (Math.abs(x) < step / 2) continue;
-      items.push({ kind: 'segment', x0: x, y0: -tick, x1: x, y1: tick, style: 'axis' });
-      items.push({ kind: 'label', x: x + 2 / view.scale, y: -17 / view.scale, text: String(Number(x.toPrecision(6))), style: 'axis:label' });
-    }
-  }
-  if (box.xmin <= 0 && box.xmax >= 0) {
-    items.push({ kind: 'segment', x0: 0, y0: box.ymin, x1: 0, y1: box.ymax, style: 'axis' });
-    for (let y = Math.ceil(box.ymin / step) * step; y <= box.ymax; y += step) {
-      if (Math.abs(y) < step / 2) continue;
-      items.push({ kind: 'segment', x0: -tick, y0: y, x1: tick, y1: y, style: 'axis' });
-      items.push({ kind: 'label', x: 5 / view.scale, y: y - 6 / view.scale, text: String(Number(y.toPrecision(6))), style: 'axis:label' });
-    }
-  }
+/** A circle of `r` pixels around (x, y) as a closed world polyline (rings are strokes, not dots). */
+function ring(x: number, y: number, r: number, px: number): number[] {
+  const pts: number[] = [];
+  for (let k = 0; k <= 20; k++) pts.push(x + r * px * Math.cos((k / 20) * 2 * Math.PI), y + r * px * Math.sin((k / 20) * 2 * Math.PI));
+  return pts;
 }
 
 function dashOf(stroke: string | undefined): number[] {

@@ -2,14 +2,14 @@
 // list whenever the construction, its values, the view or the highlights change, at most once per frame.
 import { LitElement, css, html } from 'lit';
 import { customElement } from 'lit/decorators.js';
-import { Application } from 'pixi.js';
 import type { ReadableAtom } from 'nanostores';
 import { $doc, $values } from '../stores/construction.ts';
 import { $blowup, $hover, $notice, $picks, $selection, $view } from '../stores/interaction.ts';
 import { $region, $search } from '../stores/search.ts';
-import { PAPER, sceneDisplay } from '../display.ts';
+import { sceneDisplay } from '../display.ts';
 import { canvasCancel, canvasGestureActive, canvasPointerDown, canvasPointerMove, canvasPointerUp, canvasWheel } from '../canvas-controller.ts';
-import { sinkCreate, type Sink } from '../canvas-sink.ts';
+import { PixiCanvasSink, RendererNotCanvas } from '../../../shaders-free-render/pixi-sink.ts';
+import type { Viewport } from '../../../shaders-free-render/viewport.ts';
 import { pointParse } from '../../plane/parse-point.ts';
 import { f3FromBig, f3ToApprox } from '../../construct/float.ts';
 import type { PointApprox } from '../../construct/types.ts';
@@ -17,7 +17,8 @@ import { theme } from './theme.ts';
 
 /** Times of the last frames drawn (performance.now() at the end of each draw), for the drag benchmark. */
 export const frameLog: number[] = [];
-/** For each frame: ms spent building the display list, replaying it into Pixi, and rendering. */
+/** For each frame: ms spent building the display list, replaying and rendering it in the sink, and 0
+ * (the sink renders as it replays). */
 export const frameParts: [number, number, number][] = [];
 
 @customElement('nf-canvas')
@@ -33,8 +34,7 @@ export class NfCanvas extends LitElement {
     `,
   ];
 
-  private app: Application | null = null;
-  private sink: Sink | null = null;
+  private sink: PixiCanvasSink | null = null;
   private pending = 0;
   private unsubscribe: (() => void)[] = [];
   private resizeObserver: ResizeObserver | null = null;
@@ -58,16 +58,15 @@ export class NfCanvas extends LitElement {
 
   protected override async firstUpdated(): Promise<void> {
     const surface = this.renderRoot.querySelector('.surface') as HTMLElement;
-    const app = new Application();
-    await app.init({ preference: 'canvas', background: PAPER, antialias: true, resizeTo: surface, autoDensity: true, resolution: window.devicePixelRatio || 1 });
-    if (app.renderer.name !== 'canvas') {
-      $notice.set({ kind: 'error', text: `the drawing needs Pixi's canvas renderer, got "${app.renderer.name}"`, where: 'canvas' });
-      return;
+    try {
+      this.sink = await PixiCanvasSink.create(surface, Math.max(1, surface.clientWidth), Math.max(1, surface.clientHeight), window.devicePixelRatio || 1);
+    } catch (e) {
+      if (e instanceof RendererNotCanvas) {
+        $notice.set({ kind: 'error', text: e.message, where: 'canvas' });
+        return;
+      }
+      throw e;
     }
-    app.ticker.stop(); // we draw on demand, not every frame
-    surface.appendChild(app.canvas);
-    this.app = app;
-    this.sink = sinkCreate(app);
     this.resizeObserver = new ResizeObserver(() => this.resize(surface));
     this.resizeObserver.observe(surface);
     this.resize(surface);
@@ -80,14 +79,14 @@ export class NfCanvas extends LitElement {
     super.disconnectedCallback();
     for (const u of this.unsubscribe) u();
     this.resizeObserver?.disconnect();
-    this.app?.destroy();
+    this.sink?.destroy();
   }
 
   private resize(surface: HTMLElement): void {
     const w = surface.clientWidth;
     const h = surface.clientHeight;
-    if (!w || !h || !this.app) return;
-    this.app.renderer.resize(w, h);
+    if (!w || !h || !this.sink) return;
+    this.sink.resize(w, h, window.devicePixelRatio || 1);
     const v = $view.get();
     if (v.width !== w || v.height !== h) $view.set({ ...v, width: w, height: h });
     this.schedule();
@@ -103,7 +102,7 @@ export class NfCanvas extends LitElement {
 
   /** Draw now (also called by tests and the benchmark through the page hook). */
   draw(): void {
-    if (!this.app || !this.sink) return;
+    if (!this.sink) return;
     const search = $search.get();
     if (this.foundCache.key !== search.points) {
       this.foundCache = { key: search.points, points: search.points.map((p) => f3ToApprox(f3FromBig(pointParse(p)))) };
@@ -118,10 +117,11 @@ export class NfCanvas extends LitElement {
       blowup: $blowup.get(),
     });
     const t1 = performance.now();
-    this.sink.draw(list, $view.get());
+    const v = $view.get();
+    const vp: Viewport = { cx: v.cx, cy: v.cy, scale: 1 / v.scale, width: v.width, height: v.height, dpr: window.devicePixelRatio || 1 };
+    this.sink.draw(list, vp); // replays the list and renders the frame
     const t2 = performance.now();
-    this.app.render();
-    const t3 = performance.now();
+    const t3 = t2;
     frameLog.push(t3);
     frameParts.push([t1 - t0, t2 - t1, t3 - t2]);
     if (frameParts.length > 2000) frameParts.splice(0, 1000);
