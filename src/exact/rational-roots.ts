@@ -15,9 +15,11 @@
 //     not yet accounted for. Floats only propose; nothing is accepted without the exact check.
 //  3. A rational root u/v has v | a, so v <= |a|. Once a root's interval is narrower than 1/(2a²), any point x
 //     of it has |x − u/v| < 1/(2v²), so u/v is a convergent of x (Legendre; Hardy & Wright, "An Introduction
-//     to the Theory of Numbers", Thm 184) — the last convergent with denominator <= |a|. It is tested exactly
-//     (cheap divisibility filters v | a, u | f(0) first). At coarser widths w the same test with the bound
-//     v < sqrt(1/(2w)) finds roots of small height early; once N roots are found the rest are irrational.
+//     to the Theory of Numbers", ch. X, Thm 184 — theorem number from memory) — the last convergent with
+//     denominator <= |a|. It is accepted only if it lies in that root's interval and passes the exact test
+//     (cheap divisibility filters v | a, u | f(0) first); at full width a failure proves the root irrational.
+//     At coarser widths w the same test with the bound v < sqrt(1/(2w)) finds roots of small height early;
+//     once N roots are found the rest are irrational.
 import { InvalidInput } from './errors.ts';
 import { bigAbs, bitLength } from './integer.ts';
 import { rat, ratCmp, type Rational } from './rational.ts';
