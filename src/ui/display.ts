@@ -3,10 +3,9 @@
 // highlights of selection, hover and picks. The same list could feed an exporter; here it feeds the sink.
 //
 // Status shapes (readable in greyscale; the same code as the figure exporter): exact = filled disc,
-// algebraic = ring, approximate = dashed ring. Selection = a wide pale halo, hover = a thin dark halo.
+// algebraic = ring, approximate = dashed ring. Selection = a wide pale halo, hover = a thin dark ring.
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
 import { curvePrepare, curveTrace, type PreparedCurve } from '../../shaders-free-render/trace.ts';
-import { SINK_LOOK } from '../../shaders-free-render/pixi-sink.ts';
 import type { ConstructionDoc, CurveValue, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
 import type { Form } from '../poly/form.ts';
 import { curveLandmarks } from '../poly/curve-landmarks.ts';
@@ -23,8 +22,6 @@ export interface DisplayExtras {
   readonly region?: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number } | null;
 }
 
-/** The sink's paper, so rims and holes of point marks match the background. */
-export const PAPER = SINK_LOOK.background;
 const HALO_SELECT = '#f2c14e';
 const HALO_HOVER = '#2b2b2b';
 
@@ -184,17 +181,14 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
         styles['halo:hover'] = style(HALO_HOVER, 1.5, HALO_HOVER, 0);
         pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, r + 4, px), closed: true, ends: null, style: 'halo:hover', owner: o.id });
       }
-      // exact: a filled disc with a paper rim; algebraic: a ring; approximate: a dashed ring.
+      // exact: a filled disc; algebraic: a ring; approximate: a dashed ring. One item each: the sink strokes
+      // item by item, so a drag with hundreds of points costs what it draws.
       const key = `point:${v.status}:${o.style.colour}:${r}`;
       if (v.status === 'exact') {
         styles[key] = style(o.style.colour, 0, o.style.colour, r);
-        styles['point:rim'] = style(PAPER, 1.25, PAPER, 0);
         pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: key, owner: o.id });
-        pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, r, px), closed: true, ends: null, style: 'point:rim', owner: o.id });
       } else {
         styles[key] = v.status === 'algebraic' ? style(o.style.colour, 2, o.style.colour, 0) : style(o.style.colour, 1.75, o.style.colour, 0, [2.5, 2]);
-        styles['point:hole'] = style(PAPER, 0, PAPER, r - 1);
-        pointItems.push({ kind: 'dot', x: a.x, y: a.y, role: 'point', style: 'point:hole', owner: o.id });
         pointItems.push({ kind: 'polyline', points: ring(a.x, a.y, v.status === 'algebraic' ? r : r + 0.5, px), closed: true, ends: null, style: key, owner: o.id });
       }
       if (o.style.showLabel || atInfinity) {
