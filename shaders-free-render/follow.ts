@@ -7,9 +7,14 @@
 // when Smale's alpha test at the predicted point is small (alpha = beta * gamma < ALPHA_MAX), so Newton
 // converges to the root next to the prediction rather than to a neighbouring branch, and when the new
 // vertex is at most `maxGapPx` from the last one.
-import { frameEval, type Frame } from './frame.ts';
+import { frameAtU, frameEval, type Frame } from './frame.ts';
+import { fpolyRealRoots } from './upoly-float.ts';
 
 const ALPHA_MAX = 0.03;
+/** Largest corrector move accepted, as a fraction of the predictor step. */
+const CORRECTION_MAX = 0.2;
+/** Largest distance of a long chord's midpoint from the curve, as a fraction of the step (about 9 degrees of turn). */
+const SAGITTA_MAX = 0.02;
 
 export interface FollowView {
   readonly fr: Frame;
@@ -26,8 +31,9 @@ export interface FollowView {
 }
 
 export type FollowEnd =
-  /** Reached the line U = uEnd (the branch crosses it, or ends at a point on it). */
-  | { readonly kind: 'line'; readonly u: number; readonly v: number }
+  /** Reached the line U = uEnd (the branch crosses it, or ends at a point on it): (u, v) is the tangent's
+   * meet with the line, (lastU, lastV) the last vertex. */
+  | { readonly kind: 'line'; readonly u: number; readonly v: number; readonly lastU: number; readonly lastV: number }
   /** Turned back in U before the line: a fold the critical abscissae did not announce. */
   | { readonly kind: 'fold'; readonly u: number; readonly v: number }
   /** Gave up (step size underflow): the branch is left open here. */
@@ -72,13 +78,44 @@ function fibreAlpha(fr: Frame, steep: boolean, fixed: number, x0: number, buf: F
 }
 
 /**
- * Follow the branch through (u, v) in direction dir (+1 or -1 in U) up to the line U = uEnd, appending
- * vertices (frame coordinates, the start excluded) to `out`.
+ * True when the chord's midpoint lies near the curve (within SAGITTA_MAX of the step): a long step that
+ * skipped a bend of its own branch onto a neighbouring one fails this. `ev` is scratch space.
  */
-export function branchFollow(fv: FollowView, u: number, v: number, dir: 1 | -1, uEnd: number, out: number[]): FollowEnd {
+function chordHugs(fv: FollowView, u: number, v: number, un: number, vn: number, h: number, ev: Float64Array): boolean {
+  const mu = 0.5 * (u + un);
+  const mv = 0.5 * (v + vn);
+  frameEval(fv.fr, mu, mv, ev);
+  const g2 = ev[1] * ev[1] + ev[2] * ev[2];
+  if (!(g2 > 0)) return false;
+  const k = ev[0] / g2;
+  return screenLength(fv, k * ev[1], k * ev[2]) <= SAGITTA_MAX * h;
+}
+
+/** Index of the real root of G(u, ·) nearest to v, counted from below (the branch's place in its fibre). */
+export function fibreIndex(fr: Frame, u: number, v: number): number {
+  const roots = fpolyRealRoots(frameAtU(fr, u));
+  let best = -1;
+  let bestD = Infinity;
+  for (let i = 0; i < roots.length; i++) {
+    const d = Math.abs(roots[i].t - v);
+    if (d < bestD) {
+      bestD = d;
+      best = i;
+    }
+  }
+  return best;
+}
+
+/**
+ * Follow the branch through (u, v) in direction dir (+1 or -1 in U) up to the line U = uEnd, appending
+ * vertices (frame coordinates, the start excluded) to `out`. `index` is the branch's place among the real
+ * roots of G(U, ·) (from below), used to check long steps.
+ */
+export function branchFollow(fv: FollowView, u: number, v: number, dir: 1 | -1, uEnd: number, out: number[], index = -1): FollowEnd {
   const fr = fv.fr;
   const ev = new Float64Array(4);
   const buf = new Float64Array(fr.degree + 1);
+  const scratch = new Float64Array(4);
   // Newton stops once its step is below a ten-thousandth of a pixel: vertices need 0.25 px.
   const tolU = 1e-4 / Math.max(fv.pxX, fv.pxY);
   frameEval(fr, u, v, ev);
@@ -104,7 +141,7 @@ export function branchFollow(fv: FollowView, u: number, v: number, dir: 1 | -1, 
       if ((up - uEnd) * dir >= 0) {
         // The line is within one step: land on it along the tangent and let the junction settle it.
         const t = (uEnd - u) / tu;
-        return { kind: 'line', u: uEnd, v: v + tv * t };
+        return { kind: 'line', u: uEnd, v: v + tv * t, lastU: u, lastV: v };
       }
       if (!(fibreAlpha(fr, steep, steep ? vp : up, steep ? up : vp, buf) < ALPHA_MAX)) {
         h *= 0.5;
@@ -127,6 +164,25 @@ export function branchFollow(fv: FollowView, u: number, v: number, dir: 1 | -1, 
       if (nu * tu + nv * tv < 0) {
         nu = -nu;
         nv = -nv;
+      }
+      // A corrector that moves the point by a sizeable part of the step has found another branch
+      // (possible on long steps far outside the window even when Newton itself converges): shorten.
+      if (screenLength(fv, un - up, vn - vp) > CORRECTION_MAX * h) {
+        h *= 0.5;
+        frameEval(fr, u, v, ev);
+        continue;
+      }
+      // Between critical abscissae the roots of G(U, ·) keep their order, so a long step (far outside
+      // the window, where nothing else guards it) must land on the branch's own index in the fibre.
+      if (h > 4 * fv.maxStepPx && (!chordHugs(fv, u, v, un, vn, h, scratch) || (index >= 0 && fibreIndex(fr, un, vn) !== index))) {
+        h *= 0.5;
+        frameEval(fr, u, v, ev);
+        continue;
+      }
+      if ((un - uEnd) * dir >= 0) {
+        // The corrector (in U, on a steep stretch) carried the point over the line: stop at the line.
+        const t = (uEnd - u) / tu;
+        return { kind: 'line', u: uEnd, v: v + tv * t, lastU: u, lastV: v };
       }
       if (nu * dir <= 0 || (un - u) * dir <= 0) {
         // The tangent turned back in U: a fold inside the interval (or at its end, reached early).

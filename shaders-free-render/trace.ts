@@ -117,17 +117,21 @@ export function curveTrace(curve: PreparedCurve, view: TraceView, options: Trace
     const b = breaks[k + 1];
     const mid = 0.5 * (a + b);
     if (!(b > a)) continue;
-    for (const root of fpolyRealRoots(frameAtU(fr, mid))) {
+    const roots = fpolyRealRoots(frameAtU(fr, mid));
+    for (let index = 0; index < roots.length; index++) {
+      const root = roots[index];
       pieces++;
       const left: number[] = [];
       const right: number[] = [];
-      const endL = branchFollow(fv, mid, root.t, -1, a, left);
-      const endR = branchFollow(fv, mid, root.t, 1, b, right);
+      const endL = branchFollow(fv, mid, root.t, -1, a, left, index);
+      const endR = branchFollow(fv, mid, root.t, 1, b, right, index);
       const jl = endResolve(fv, endL, k, k === 0, junctions);
       const jr = endResolve(fv, endR, k + 1, k + 1 === breaks.length - 1, junctions);
       const seq: number[] = [jl.u, jl.v];
       for (let i = left.length - 2; i >= 0; i -= 2) seq.push(left[i], left[i + 1]);
-      seq.push(mid, root.t, ...right, jr.u, jr.v);
+      seq.push(mid, root.t);
+      for (let i = 0; i < right.length; i++) seq.push(right[i]);
+      seq.push(jr.u, jr.v);
       vertices += runsSplit(fv, seq, jl.junction, jr.junction, frags);
     }
   }
@@ -201,13 +205,27 @@ interface ResolvedEnd {
 function endResolve(fv: FollowView, end: FollowEnd, line: number, rangeEdge: boolean, junctions: Junction[]): ResolvedEnd {
   if (rangeEdge && end.kind === 'line') return { u: end.u, v: end.v, junction: -1 };
   const ev = new Float64Array(4);
+  // Candidates: on the line (Newton in V), a fold, a singular point; the nearest to the last vertex wins,
+  // and none farther than a few steps (the last vertex is within two steps of the true end).
+  const lastU = end.kind === 'line' ? end.lastU : end.u;
+  const lastV = end.kind === 'line' ? end.lastV : end.v;
   let p: [number, number] | null = null;
-  if (end.kind === 'line') p = lineRefine(fv.fr, end.u, end.v, ev);
-  if (!p) p = foldRefine(fv.fr, end.u, end.v, ev);
-  if (!p) p = singularRefine(fv.fr, end.u, end.v, ev);
-  if (p && screenLength(fv, p[0] - end.u, p[1] - end.v) > 3) p = null;
-  const [u, v] = p ?? [end.u, end.v];
-  let best = -1;
+  let best = Infinity;
+  const cands = [
+    end.kind === 'line' ? lineRefine(fv.fr, end.u, end.v, ev) : null,
+    foldRefine(fv.fr, end.u, end.v, ev),
+    singularRefine(fv.fr, end.u, end.v, ev),
+  ];
+  for (const c of cands) {
+    if (!c) continue;
+    const dpx = screenLength(fv, c[0] - lastU, c[1] - lastV);
+    if (dpx < best && dpx <= 4 * fv.maxStepPx) {
+      best = dpx;
+      p = c;
+    }
+  }
+  const [u, v] = p ?? [lastU, lastV];
+  let bestJ = -1;
   let bestPx = Infinity;
   for (let j = 0; j < junctions.length; j++) {
     const J = junctions[j];
@@ -215,16 +233,16 @@ function endResolve(fv: FollowView, end: FollowEnd, line: number, rangeEdge: boo
     const dpx = screenLength(fv, J.u - u, J.v - v);
     const reach = J.singular ? 1 : 0.5;
     if (dpx <= reach && dpx < bestPx) {
-      best = j;
+      bestJ = j;
       bestPx = dpx;
     }
   }
-  if (best < 0) {
+  if (bestJ < 0) {
     if (!p && end.kind === 'stuck') return { u, v, junction: -1 };
     junctions.push({ u, v, singular: false, line: end.kind === 'line' ? line : -2, ends: [] });
-    best = junctions.length - 1;
+    bestJ = junctions.length - 1;
   }
-  return { u: junctions[best].u, v: junctions[best].v, junction: best };
+  return { u: junctions[bestJ].u, v: junctions[bestJ].v, junction: bestJ };
 }
 
 // Newton in V on the line U = u (linear convergence at a multiple root is enough here).
@@ -268,6 +286,7 @@ function runsSplit(fv: FollowView, seq: number[], jStart: number, jEnd: number, 
     }
     if (!inside && run && prevIn) {
       const c = borderPoint(fv, u, v, seq[2 * i - 2], seq[2 * i - 1]);
+      gapFill(fv, run, c[0], c[1], 0);
       run.push(c[0], c[1]);
       frags.push({ points: run, start: runStart, end: -1 });
       kept += run.length / 2;
