@@ -13,7 +13,7 @@
 import { InvalidInput } from './errors.ts';
 import { bitLength } from './integer.ts';
 import { rat, ratCmp, type Rational } from './rational.ts';
-import { RootRefiner, type RootInterval } from './root-refine.ts';
+import { RootRefiner, dyadicRat, type RootInterval } from './root-refine.ts';
 import {
   upolyDerivative, upolyReflect, upolySignAt, upolySquarefreePart, upolyTaylorShift1InPlace,
 } from './upoly.ts';
@@ -112,7 +112,7 @@ function isolatePositive(f: readonly bigint[]): DyadicRoot[] {
 }
 
 function dyadic(c: bigint, e: number): Rational {
-  return e >= 0 ? rat(c << BigInt(e), 1n) : rat(c, 1n << BigInt(-e));
+  return e >= 0 ? { num: c << BigInt(e), den: 1n } : dyadicRat(c, -e);
 }
 
 /** Moves ends that are roots of f (neighbouring exact roots) inwards. Assumes f square-free, one root inside. */

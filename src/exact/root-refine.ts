@@ -10,7 +10,7 @@
 // refinement for real roots", 2006): precision doubles per accepted step.
 import { InvalidInput } from './errors.ts';
 import { bitLength } from './integer.ts';
-import { rat, ratCmp, type Rational } from './rational.ts';
+import { ratCmp, type Rational } from './rational.ts';
 import { upolyScaledFloats } from './float-roots.ts';
 import { upolyDerivative, upolySignAt } from './upoly.ts';
 
@@ -30,6 +30,18 @@ export function upolyEvalDyadic(f: readonly bigint[], m: bigint, k: number): big
 
 function sgn(v: bigint): -1 | 0 | 1 {
   return v > 0n ? 1 : v < 0n ? -1 : 0;
+}
+
+/**
+ * The canonical rational m/2^k (k >= 0) without a gcd: strip the common factors 2 (a general gcd of a
+ * 3,000-bit numerator with 2^k would cost a hundred Lehmer steps).
+ */
+export function dyadicRat(m: bigint, k: number): Rational {
+  if (m === 0n) return { num: 0n, den: 1n };
+  const low = m & -m; // the lowest set bit of m
+  const tz = bitLength(low) - 1;
+  const t = Math.min(tz, k);
+  return { num: m >> BigInt(t), den: 1n << BigInt(k - t) };
 }
 
 /** floor(a / b) for b > 0. */
@@ -70,8 +82,8 @@ export class RootRefiner {
 
   /** Finds dyadic points xL in [lo, root) and xR in (root, hi] on one grid. */
   private toDyadic(lo: Rational, hi: Rational, sLo: -1 | 1): void {
-    const gap = rat(hi.num * lo.den - lo.num * hi.den, lo.den * hi.den);
-    let k = Math.max(0, bitLength(gap.den) - bitLength(gap.num) + 3);
+    // 2^-k below a quarter of the width (unreduced fraction: only its size matters).
+    let k = Math.max(0, bitLength(lo.den * hi.den) - bitLength(hi.num * lo.den - lo.num * hi.den) + 3);
     let aK: bigint | null = isPowerOfTwo(lo.den) ? lo.num : null;
     let aScale = aK === null ? 0 : bitLength(lo.den) - 1;
     let bK: bigint | null = isPowerOfTwo(hi.den) ? hi.num : null;
@@ -79,7 +91,7 @@ export class RootRefiner {
     for (; aK === null && this.exact === null; k += 8) {
       const m = -floorDiv(-lo.num << BigInt(k), lo.den); // ceil(lo·2^k)
       const s = sgn(upolyEvalDyadic(this.f, m, k));
-      if (s === 0) this.exact = rat(m, 1n << BigInt(k));
+      if (s === 0) this.exact = dyadicRat(m, k);
       else if (s === sLo) {
         aK = m;
         aScale = k;
@@ -88,7 +100,7 @@ export class RootRefiner {
     for (; bK === null && this.exact === null; k += 8) {
       const mf = floorDiv(hi.num << BigInt(k), hi.den); // floor(hi·2^k)
       const s = sgn(upolyEvalDyadic(this.f, mf, k));
-      if (s === 0) this.exact = rat(mf, 1n << BigInt(k));
+      if (s === 0) this.exact = dyadicRat(mf, k);
       else if (s === -sLo) {
         bK = mf;
         bScale = k;
@@ -109,8 +121,7 @@ export class RootRefiner {
 
   interval(): RootInterval {
     if (this.exact) return { lo: this.exact, hi: this.exact };
-    const den = 1n << BigInt(this.k);
-    return { lo: rat(this.a, den), hi: rat(this.b, den) };
+    return { lo: dyadicRat(this.a, this.k), hi: dyadicRat(this.b, this.k) };
   }
 
   /** Is q in the closed bracket? */
@@ -163,17 +174,17 @@ export class RootRefiner {
       const up = BigInt(K - this.k);
       if (l < this.a << up || h > this.b << up) return;
       if (spread === 1n && upolyEvalDyadic(this.f, m, K) === 0n) {
-        this.exact = rat(m, 1n << BigInt(K)); // the proposal itself is the root (a dyadic root)
+        this.exact = dyadicRat(m, K); // the proposal itself is the root (a dyadic root)
         return;
       }
       const sl = sgn(upolyEvalDyadic(this.f, l, K));
       if (sl === 0) {
-        this.exact = rat(l, 1n << BigInt(K));
+        this.exact = dyadicRat(l, K);
         return;
       }
       const sh = sgn(upolyEvalDyadic(this.f, h, K));
       if (sh === 0) {
-        this.exact = rat(h, 1n << BigInt(K));
+        this.exact = dyadicRat(h, K);
         return;
       }
       if (sl === this.sa && sh === -this.sa) {
@@ -191,7 +202,7 @@ export class RootRefiner {
     this.b <<= 1n;
     this.k += 1;
     const s = sgn(upolyEvalDyadic(this.f, m, this.k));
-    if (s === 0) this.exact = rat(m, 1n << BigInt(this.k));
+    if (s === 0) this.exact = dyadicRat(m, this.k);
     else if (s === this.sa) this.a = m;
     else this.b = m;
   }
@@ -204,7 +215,7 @@ export class RootRefiner {
     const K = Math.max(k0 + 1, 2 * wb - this.guard);
     const P = upolyEvalDyadic(this.f, m0, k0);
     if (P === 0n) {
-      this.exact = rat(m0, 1n << BigInt(k0));
+      this.exact = dyadicRat(m0, k0);
       return;
     }
     const Q = this.df.length === 0 ? 0n : upolyEvalDyadic(this.df, m0, k0);
@@ -218,11 +229,11 @@ export class RootRefiner {
         const sL = sgn(upolyEvalDyadic(this.f, lo, K));
         const sH = sL === 0 ? 0 : sgn(upolyEvalDyadic(this.f, hi, K));
         if (sL === 0) {
-          this.exact = rat(lo, 1n << BigInt(K));
+          this.exact = dyadicRat(lo, K);
           return;
         }
         if (sH === 0) {
-          this.exact = rat(hi, 1n << BigInt(K));
+          this.exact = dyadicRat(hi, K);
           return;
         }
         if (sL === this.sa && sH === -this.sa) {

@@ -99,3 +99,13 @@ describe('upolyRefineRoot', () => {
     expect(() => upolyRefineRoot([-2n, 0n, 1n], { lo: rat(2n), hi: rat(3n) }, rat(1n, 10n))).toThrow(/sign/);
   });
 });
+
+describe('dyadicRat', () => {
+  it('is canonical without a gcd (common practice)', async () => {
+    const { dyadicRat } = await import('../../../src/exact/root-refine.ts');
+    expect(dyadicRat(12n, 4)).toEqual(rat(12n, 16n));
+    expect(dyadicRat(-12n, 1)).toEqual(rat(-6n, 1n));
+    expect(dyadicRat(0n, 9)).toEqual(rat(0n));
+    expect(dyadicRat(7n << 3000n, 3002)).toEqual(rat(7n, 4n));
+  });
+});
