@@ -13,7 +13,7 @@ import { parametrisationAt } from '../../cubic/parametrise.ts';
 import { parametrisationOf } from '../../construct/evaluate-exact.ts';
 import { constructionAdd, constructionObject } from '../../construct/graph.ts';
 import { ratSnap } from '../../construct/snap.ts';
-import { f3FromBig, f3ToApprox } from '../../construct/float.ts';
+import { f3Cross, f3FromBig, f3ToApprox } from '../../construct/float.ts';
 import type { CurveValue } from '../../construct/types.ts';
 import { $doc, $values, docCommit } from '../stores/construction.ts';
 import { $blowup, $selection, noticeShow, type BlowupView } from '../stores/interaction.ts';
@@ -149,9 +149,26 @@ export class NfBlowup extends LitElement {
   }
 }
 
-/** The tangent lines at the singular point that are rational lines, as float triples. */
+/** The real tangent lines at the singular points, as float triples: rational lines as they are, a
+ * conjugate pair a·X² + b·XY + ... (vertex P) split in floats along its directions (u : v : 0) with
+ * a·u² + b·uv + d·v² = 0 (only for drawing; the exact pair is in the panel). */
 function tangentLines(f: Form): (readonly [number, number, number])[] {
   const r = cubicReportOf(f);
   if (typeof r === 'string') return [];
-  return r.singularities.points.flatMap((s) => s.tangents.filter((t) => t.degree === 1).map((t) => f3FromBig(t.coeffs as readonly bigint[])));
+  const out: (readonly [number, number, number])[] = [];
+  for (const s of r.singularities.points) {
+    if (!s.real) continue;
+    for (const t of s.tangents) {
+      if (t.degree === 1) out.push(f3FromBig(t.coeffs as readonly bigint[]));
+      else if (t.degree === 2 && s.point && s.point[2] !== 0n) {
+        const [a, b, , d] = t.coeffs.map(Number);
+        const disc = b * b - 4 * a * d;
+        if (disc < 0) continue; // an acnode: no real tangent
+        const p = f3FromBig(s.point);
+        const dirs: [number, number][] = a !== 0 ? [[(-b + Math.sqrt(disc)) / (2 * a), 1], [(-b - Math.sqrt(disc)) / (2 * a), 1]] : [[1, 0], [-d, b]];
+        for (const [u, v] of dirs) out.push(f3Cross(p, [u, v, 0]));
+      }
+    }
+  }
+  return out;
 }

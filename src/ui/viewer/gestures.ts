@@ -19,7 +19,11 @@ export function gesturesAttach(el: HTMLElement, target: GestureTarget): () => vo
     return ps.length >= 2 ? [ps[0], ps[1]] : null;
   };
   const down = (e: PointerEvent): void => {
-    el.setPointerCapture(e.pointerId);
+    try {
+      el.setPointerCapture(e.pointerId);
+    } catch {
+      // A pointer the browser no longer tracks cannot be captured; the drag still works inside el.
+    }
     pointers.set(e.pointerId, local(e));
     e.preventDefault();
   };
