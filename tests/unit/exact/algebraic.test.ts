@@ -108,3 +108,25 @@ describe('real algebraic numbers', () => {
     expect(() => algebraicToDecimal(sqrt(2n), 0)).toThrow(/digits/);
   });
 });
+
+describe('algebraic comparison on roots of random cubics and quintics (property)', () => {
+  it('is a total order consistent with 25-digit decimals, and each refinement keeps the number', () => {
+    const poly = fc.array(fc.bigInt({ min: -(10n ** 8n), max: 10n ** 8n }), { minLength: 4, maxLength: 6 }).filter((c) => c[c.length - 1] !== 0n);
+    fc.assert(
+      fc.property(poly, poly, fc.integer({ min: 1, max: 80 }), (p, q, w) => {
+        const xs = [...algebraicRealRoots(p), ...algebraicRealRoots(q)];
+        const sorted = xs.slice().sort(algebraicCmp);
+        for (let i = 1; i < sorted.length; i++) {
+          const c = algebraicCmp(sorted[i - 1], sorted[i]);
+          expect(c).toBeLessThanOrEqual(0);
+          expect(algebraicCmp(sorted[i], sorted[i - 1])).toBe(c === 0 ? 0 : 1);
+          const a = Number(algebraicToDecimal(sorted[i - 1], 25));
+          const b = Number(algebraicToDecimal(sorted[i], 25));
+          expect(a).toBeLessThanOrEqual(b);
+        }
+        for (const x of xs) expect(algebraicCmp(x, algebraicRefine(x, rat(1n, 2n ** BigInt(w))))).toBe(0);
+      }),
+      { numRuns: 40 },
+    );
+  });
+});
