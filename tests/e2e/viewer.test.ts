@@ -78,6 +78,39 @@ describe('curve viewer (e2e)', () => {
     await page.waitForTimeout(100);
   });
 
+  it('zooms with a two-finger pinch and pans with one finger (touch)', async () => {
+    const context = await h.browser.newContext({ viewport: { width: 900, height: 700 }, hasTouch: true });
+    try {
+      const touchPage = await context.newPage();
+      await touchPage.goto(h.url + PAGE, { timeout: 60_000 });
+      await touchPage.waitForFunction(() => (document.querySelector('.nf-viewer') as HTMLElement | null)?.dataset.pieces !== undefined, undefined, { timeout: 60_000 });
+      const cdp = await context.newCDPSession(touchPage);
+      const box = (await touchPage.locator('.nf-stage').boundingBox())!;
+      const cx = box.x + box.width / 2;
+      const cy = box.y + box.height / 2;
+      const before = (await data(touchPage)).view.split(',').map(Number);
+      const touch = (type: string, pts: [number, number][]): Promise<unknown> =>
+        cdp.send('Input.dispatchTouchEvent', { type, touchPoints: pts.map(([x, y], id) => ({ x, y, id })) });
+      await touch('touchStart', [[cx - 40, cy], [cx + 40, cy]]);
+      for (let k = 1; k <= 8; k++) await touch('touchMove', [[cx - 40 - 10 * k, cy], [cx + 40 + 10 * k, cy]]);
+      await touch('touchEnd', []);
+      await touchPage.waitForTimeout(150);
+      const pinched = (await data(touchPage)).view.split(',').map(Number);
+      // The fingers moved from 80 px apart to 240 px apart: three times closer in, about the midpoint.
+      expect(pinched[2]).toBeCloseTo(before[2] / 3, 6);
+      expect(pinched[0]).toBeCloseTo(before[0], 6);
+      await touch('touchStart', [[cx, cy]]);
+      for (let k = 1; k <= 5; k++) await touch('touchMove', [[cx + 12 * k, cy]]);
+      await touch('touchEnd', []);
+      await touchPage.waitForTimeout(150);
+      const panned = (await data(touchPage)).view.split(',').map(Number);
+      expect(panned[0]).toBeCloseTo(pinched[0] - 60 * pinched[2], 6);
+      await touchPage.screenshot({ path: shotPath('viewer-touch') });
+    } finally {
+      await context.close();
+    }
+  });
+
   it('keeps the last good curve and says where a bad equation fails', async () => {
     const input = page.locator('#nf-equation');
     await input.fill('y^2 = x^3 +');
