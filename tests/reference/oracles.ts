@@ -10,7 +10,8 @@ function runScript(cmd: string, args: string[], script: string, timeoutMs: numbe
   const file = join(dir, 'in.txt');
   writeFileSync(file, script);
   try {
-    return execFileSync(cmd, [...args, file], { encoding: 'utf8', timeout: timeoutMs, maxBuffer: 1 << 28 });
+    // Run inside the scratch folder: Singular's classify.lib leaves an NFlist database in its working directory.
+    return execFileSync(cmd, [...args, file], { cwd: dir, encoding: 'utf8', timeout: timeoutMs, maxBuffer: 1 << 28 });
   } catch (e) {
     const err = e as { code?: string; stderr?: string; message: string };
     if (err.code === 'ENOENT') throw new Error(`${cmd} is not installed: run npm test (it installs it) or apt-get install it`);
