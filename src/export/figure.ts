@@ -151,3 +151,36 @@ export function num(x: number, digits = 3): string {
   const s = x.toFixed(digits).replace(/\.?0+$/, '');
   return s === '-0' ? '0' : s;
 }
+
+/** Dash patterns (CSS pixels) given in turn to strokes that greyscale would otherwise make look alike. */
+const GREY_DASHES: readonly (readonly number[])[] = [[7, 3.5], [1.5, 3], [8, 3, 1.5, 3], [3, 3]];
+
+/**
+ * Greyscale print keeps objects apart: strokes (curves, lines) whose colours differ but turn into nearly
+ * the same grey (within 32 of 255) and share a dash pattern get the next pattern of GREY_DASHES. Returns
+ * the list unchanged when nothing needs it; never changes dots or labels.
+ */
+export function greyscaleDistinguish(list: DisplayList): DisplayList {
+  const stroked = new Set<string>();
+  for (const it of list.items) if (it.kind === 'polyline' || it.kind === 'segment') stroked.add(it.style);
+  const kept: { grey: number; dash: string; colour: string }[] = [];
+  const styles: Record<string, ItemStyle> = { ...list.styles };
+  let next = 0;
+  let changed = false;
+  for (const key of stroked) {
+    const st = list.styles[key];
+    if (!st) continue;
+    const grey = parseInt(inkOf(st.stroke, true).slice(1, 3), 16);
+    const colour = inkOf(st.stroke, false);
+    const clash = (dash: string) => kept.some((k) => k.colour !== colour && Math.abs(k.grey - grey) <= 32 && k.dash === dash);
+    let dash = st.dash.join(',');
+    while (clash(dash) && next < GREY_DASHES.length) {
+      const d = GREY_DASHES[next++];
+      styles[key] = { ...st, dash: d };
+      dash = d.join(',');
+      changed = true;
+    }
+    kept.push({ grey, dash, colour });
+  }
+  return changed ? { items: list.items, styles } : list;
+}

@@ -2,7 +2,7 @@
 // written as escaped text (a label "<script>" stays those characters, it never becomes markup); the exact
 // facts of the scene go into <metadata> (as JSON) and into one comment line per object.
 import type { DisplayItem } from '../../shaders-free-render/display-list.ts';
-import { dotShape, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
+import { dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
 
 /** Text for XML content and attribute values: the five special characters escaped, control characters dropped. */
 export function xmlText(s: string): string {
@@ -20,7 +20,8 @@ function xmlComment(s: string): string {
   return `<!-- ${xmlText(s).replace(/-(?=-)/g, '- ').replace(/-$/, '- ')} -->`;
 }
 
-export function figureToSvg(input: FigureInput): string {
+export function figureToSvg(given: FigureInput): string {
+  const input = given.options?.greyscale ? { ...given, list: greyscaleDistinguish(given.list) } : given;
   const f = pageFrame(input.view, input.options);
   const facts = new Map(input.facts.map((x) => [x.id, x]));
   const out: string[] = [];

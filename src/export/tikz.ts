@@ -4,7 +4,7 @@
 // carries everything it needs. Labels are escaped for LaTeX, so no label can run as a command. The exact
 // facts of the scene are written as % comments, one line per object.
 import type { DisplayItem } from '../../shaders-free-render/display-list.ts';
-import { dotShape, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
+import { dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
 import { factLine } from './svg.ts';
 
 const LATEX_SPECIAL: Record<string, string> = {
@@ -47,7 +47,8 @@ function latexComment(s: string): string {
   return `% ${s.replace(/[\r\n]+/g, ' ')}`;
 }
 
-export function figureToTikzSnippet(input: FigureInput): string {
+export function figureToTikzSnippet(given: FigureInput): string {
+  const input = given.options?.greyscale ? { ...given, list: greyscaleDistinguish(given.list) } : given;
   const f = pageFrame(input.view, input.options);
   const facts = new Map(input.facts.map((x) => [x.id, x]));
   const colours = new Map<string, string>();

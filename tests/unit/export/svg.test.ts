@@ -97,3 +97,29 @@ describe('SVG export', () => {
     expect(xmlText('a<b>&"\'\u0001')).toBe('a&lt;b&gt;&amp;&quot;&apos;');
   });
 });
+
+describe('greyscale keeps strokes apart', () => {
+  it('two solid curves of colours that turn into nearly the same grey get different dash patterns', async () => {
+    const { greyscaleDistinguish } = await import('../../../src/export/figure.ts');
+    const list: DisplayList = {
+      items: [
+        { kind: 'polyline', points: [0, 0, 1, 1], closed: false, ends: null, style: 'blue', owner: 'c1' },
+        { kind: 'polyline', points: [0, 1, 1, 0], closed: false, ends: null, style: 'red', owner: 'c2' },
+        { kind: 'segment', x0: 0, y0: 0, x1: 1, y1: 0, style: 'black', owner: 'l1' },
+      ],
+      styles: {
+        blue: { stroke: '#1f5fa8', width: 2, fill: '#1f5fa8', radius: 2, dash: [], fontSize: 12 },
+        red: { stroke: '#b8321a', width: 2, fill: '#b8321a', radius: 2, dash: [], fontSize: 12 },
+        black: { stroke: '#000000', width: 1, fill: '#000000', radius: 2, dash: [], fontSize: 12 },
+      },
+    };
+    const out = greyscaleDistinguish(list);
+    expect(out.styles.blue.dash).toEqual([]);
+    expect(out.styles.red.dash).not.toEqual([]);
+    expect(out.styles.black.dash).toEqual([]); // black stays far from both greys
+    // and the SVG in greyscale carries the pattern; in colour it does not
+    const base = { view: { xmin: 0, xmax: 1, ymin: 0, ymax: 1 }, facts: [] };
+    expect(figureToSvg({ ...base, list, options: { greyscale: true } })).toMatch(/data-owner="c2"[^>]*stroke-dasharray/);
+    expect(figureToSvg({ ...base, list })).not.toMatch(/stroke-dasharray/);
+  });
+});
