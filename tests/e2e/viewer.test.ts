@@ -89,7 +89,7 @@ describe('curve viewer (e2e)', () => {
       const cx = box.x + box.width / 2;
       const cy = box.y + box.height / 2;
       const before = (await data(touchPage)).view.split(',').map(Number);
-      const touch = (type: string, pts: [number, number][]): Promise<unknown> =>
+      const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', pts: [number, number][]): Promise<unknown> =>
         cdp.send('Input.dispatchTouchEvent', { type, touchPoints: pts.map(([x, y], id) => ({ x, y, id })) });
       await touch('touchStart', [[cx - 40, cy], [cx + 40, cy]]);
       for (let k = 1; k <= 8; k++) await touch('touchMove', [[cx - 40 - 10 * k, cy], [cx + 40 + 10 * k, cy]]);
