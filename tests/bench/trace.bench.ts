@@ -78,6 +78,7 @@ export const traceBench: BenchSuite = {
     const retrace: number[] = [];
     const first: number[] = [];
     const baseline: number[] = [];
+    const floatOnly: number[] = [];
     let tracerErrors = 0;
     let baselineErrors = 0;
     let vertices = 0;
@@ -88,6 +89,10 @@ export const traceBench: BenchSuite = {
       const rt = medianMs(() => curveTrace(prepared, VIEW), 21, 5);
       const ft = medianMs(() => curveTrace(curvePrepare(floats, curveLandmarks(form)), VIEW), 7, 2);
       const bt = medianMs(() => marchingSquares(floats, VIEW), 3, 1);
+      // Without the core: the tracer's own float search for critical points, redone for every view.
+      const floatPrepared = curvePrepare(floats);
+      const ot = medianMs(() => curveTrace(floatPrepared, VIEW), 21, 5);
+      floatOnly.push(ot);
       const tr = curveTrace(prepared, VIEW);
       vertices += tr.stats.vertices;
       const got = traceComponents(tr);
@@ -99,7 +104,7 @@ export const traceBench: BenchSuite = {
       baseline.push(bt);
       figures.push({
         label: c.eq,
-        values: { retraceMs: rt, firstMs: ft, marchingMs: bt, components: c.components, tracer: got, marching: ms.components },
+        values: { retraceMs: rt, firstMs: ft, floatOnlyMs: ot, marchingMs: bt, components: c.components, tracer: got, marching: ms.components },
       });
     }
     const med = (xs: number[]): number => [...xs].sort((a, b) => a - b)[xs.length >> 1];
@@ -108,6 +113,7 @@ export const traceBench: BenchSuite = {
       values: {
         retraceMs: med(retrace),
         firstTraceWithLandmarksMs: med(first),
+        floatLandmarksTraceMs: med(floatOnly),
         marchingSquaresMs: med(baseline),
         speedup: med(baseline) / med(retrace),
         tracerTopologyErrors: tracerErrors,
