@@ -1,7 +1,10 @@
-// The registry of CLI verbs. Each verb lives in its own file under src/cli/verbs/; add one line here.
+// The registry of CLI verbs, in the order `cli help` lists them. Each verb lives in its own file under
+// src/cli/verbs/; add one line here.
 import type { Verb } from './verb.ts';
 import { form } from './verbs/form.ts';
 import { through } from './verbs/through.ts';
+import { curve } from './verbs/curve.ts';
+import { parametrise } from './verbs/parametrise.ts';
 import { third } from './verbs/third.ts';
 import { sum } from './verbs/sum.ts';
 import { negate } from './verbs/negate.ts';
@@ -12,15 +15,15 @@ import { meet } from './verbs/meet.ts';
 import { ninth } from './verbs/ninth.ts';
 import { nine } from './verbs/nine.ts';
 import { points } from './verbs/points.ts';
+import { trace } from './verbs/trace.ts';
 import { figure } from './verbs/figure.ts';
 import { trials } from './verbs/trials.ts';
-import { curve } from './verbs/curve.ts';
-import { parametrise } from './verbs/parametrise.ts';
-import { trace } from './verbs/trace.ts';
 
 export const VERBS: readonly Verb[] = [
   form,
   through,
+  curve,
+  parametrise,
   third,
   sum,
   negate,
@@ -31,9 +34,7 @@ export const VERBS: readonly Verb[] = [
   ninth,
   nine,
   points,
+  trace,
   figure,
   trials,
-  curve,
-  parametrise,
-  trace,
 ];
