@@ -15,6 +15,12 @@ export const ORACLES = [
     why: 'compiling exported TikZ figures (tests/reference)',
   },
   { command: 'pdftoppm', check: 'command -v pdftoppm', packages: ['poppler-utils'], why: 'checking compiled figures' },
+  {
+    command: 'DejaVu fonts',
+    check: 'test -e /usr/share/fonts/truetype/dejavu/DejaVuSans.ttf',
+    packages: ['fonts-dejavu-core'],
+    why: 'labels in PNG figures (resvg draws with system fonts)',
+  },
 ];
 
 function usable(o) {
