@@ -8,6 +8,16 @@ import { formParse } from '../../poly/parse.ts';
 import { curveLandmarks, formFloatCoefficients } from '../../poly/curve-landmarks.ts';
 import { optionString, positionalAt, type Args } from '../args.ts';
 import { curvePrepare, curveTrace } from '../../../shaders-free-render/trace.ts';
+import { cubicComponents } from '../../cubic/factor.ts';
+import { formMul, type Form } from '../../poly/form.ts';
+
+/** The curve as a set: a cubic with a repeated component is drawn through its reduced form. */
+function formReducedForDrawing(f: Form): Form {
+  if (f.degree !== 3) return f;
+  const parts = cubicComponents(f).components;
+  if (parts.every((c) => c.multiplicity === 1)) return f;
+  return parts.map((c) => c.form).reduce((a, b) => formMul(a, b));
+}
 
 function numbersOption(args: Args, name: string, count: number, fallback: number[]): number[] {
   const text = optionString(args, name);
@@ -29,7 +39,7 @@ function numbersOption(args: Args, name: string, count: number, fallback: number
 export const trace: Verb = {
   name: 'trace',
   usage:
-    'trace EQ [--view XMIN,YMIN,XMAX,YMAX] [--pixels W,H] [--dpr R] [--float] — the drawn curve: {"polylines": [[x0, y0, x1, y1, ...]], "closed", "ends", "dots": [[x, y]], "landmarks", "ms"}',
+    'trace EQ [--view XMIN,YMIN,XMAX,YMAX] [--pixels W,H] [--dpr R] [--float] — the drawn curve: {"polylines": [[x0, y0, x1, y1, ...]], "closed", "ends", "dots": [[x, y]], "landmarks", "reduced", "vertices", "ms"}',
   switches: ['float'],
   run(args) {
     const text = positionalAt(args, 0, 'the equation of the curve');
@@ -44,7 +54,8 @@ export const trace: Verb = {
     }
     const [dpr] = numbersOption(args, 'dpr', 1, [1]);
     if (!(dpr > 0 && dpr <= 8)) throw new InvalidInput('--dpr must be between 0 and 8', '--dpr');
-    const { form } = formParse(text, 'argument 1');
+    const parsed = formParse(text, 'argument 1').form;
+    const form = formReducedForDrawing(parsed);
     if (form.degree < 1) throw new InvalidInput('the equation has no variables left: it is not a curve', 'argument 1');
     const t0 = performance.now();
     const exact = args.options.get('float') === true ? null : curveLandmarks(form);
@@ -70,6 +81,8 @@ export const trace: Verb = {
         atInfinity: exact.atInfinity,
       },
       vertices: tr.stats.vertices,
+      /** True when a repeated component was drawn once (the curve as a set). */
+      reduced: form !== parsed,
       ms: Math.round(ms * 1000) / 1000,
     };
   },

@@ -6,6 +6,16 @@ import { curveLandmarks, formFloatCoefficients } from '../../poly/curve-landmark
 import { formParse } from '../../poly/parse.ts';
 import { formToText } from '../../poly/print.ts';
 import { curvePrepare, type PreparedCurve } from '../../../shaders-free-render/trace.ts';
+import { cubicComponents } from '../../cubic/factor.ts';
+import { formMul, type Form } from '../../poly/form.ts';
+
+/** The curve as a set: a cubic with a repeated component is drawn through its reduced form. */
+function formReducedForDrawing(f: Form): Form {
+  if (f.degree !== 3) return f;
+  const parts = cubicComponents(f).components;
+  if (parts.every((c) => c.multiplicity === 1)) return f;
+  return parts.map((c) => c.form).reduce((a, b) => formMul(a, b));
+}
 
 export interface CurveReady {
   readonly ok: true;
@@ -42,14 +52,16 @@ export function curveSourceRead(text: string): CurveSource {
   const t0 = performance.now();
   let landmarks = null;
   let note: string | null = null;
+  const drawn = formReducedForDrawing(form);
+  if (drawn !== form) note = 'a repeated component is drawn once';
   try {
-    landmarks = curveLandmarks(form);
+    landmarks = curveLandmarks(drawn);
   } catch (e) {
     if (!(e instanceof NinefoldError)) throw e;
     note = `drawn without exact landmarks: ${e.message}`;
   }
   const landmarkMs = performance.now() - t0;
-  const prepared = curvePrepare({ degree: form.degree, coeffs: formFloatCoefficients(form) }, landmarks);
+  const prepared = curvePrepare({ degree: drawn.degree, coeffs: formFloatCoefficients(drawn) }, landmarks);
   const equation = `${formToText(form, { affine: !parsed.homogeneous })} = 0`;
   return { ok: true, text, degree: form.degree, equation, prepared, note, landmarkMs };
 }

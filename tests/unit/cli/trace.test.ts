@@ -34,6 +34,12 @@ describe('trace verb', () => {
     expect(out.dots.length).toBe(1);
     expect(out.dots[0][0]).toBeCloseTo(1, 9);
   });
+  it('draws a cubic with a repeated line as the set it is (the line once)', () => {
+    // (x - y)^2 (x + 1): the line y = x counted twice and the line x = -1, meeting at (-1, -1).
+    const out = run(['(x - y)^2 (x + 1) = 0', '--view', '-3,-3,3,3']) as TraceOut & { reduced: boolean };
+    expect(out.reduced).toBe(true);
+    expect(out.polylines.length).toBe(4);
+  });
   it('refuses a bad view, bad pixels and a bad equation with the place named', () => {
     const where = (argv: string[]): string => {
       try {
