@@ -9,7 +9,7 @@ export interface Junction {
   readonly u: number;
   readonly v: number;
   singular: boolean;
-  /** The critical line it lies on (-1 for a singular point filed in advance, -2 for an unannounced fold). */
+  /** Index of the critical line it lies on (-2 for an unannounced fold found while following). */
   readonly line: number;
   /** Fragment ends at it: fragment index and which end (0 = start, 1 = end). */
   readonly ends: { frag: number; side: 0 | 1 }[];

@@ -109,7 +109,13 @@ export function curveTrace(curve: PreparedCurve, view: TraceView, options: Trace
   const { critical, singular } = frameLandmarks(curve, fr, umin, umax);
   const breaks = [umin, ...critical, umax];
   const junctions: Junction[] = [];
-  for (const [u, v] of singular) junctions.push({ u, v, singular: true, line: -1, ends: [] });
+  // A singular point belongs to the critical line through it: only ends on that line may meet it (a fold
+  // on a neighbouring line a pixel away is a different point).
+  for (const [u, v] of singular) {
+    let line = 0;
+    for (let k = 1; k < breaks.length; k++) if (Math.abs(breaks[k] - u) < Math.abs(breaks[line] - u)) line = k;
+    junctions.push({ u, v, singular: true, line, ends: [] });
+  }
   const frags: Fragment[] = [];
   let vertices = 0;
   let pieces = 0;
@@ -230,7 +236,7 @@ function endResolve(fv: FollowView, end: FollowEnd, line: number, rangeEdge: boo
   let bestPx = Infinity;
   for (let j = 0; j < junctions.length; j++) {
     const J = junctions[j];
-    if (!J.singular && J.line !== line && end.kind === 'line') continue;
+    if (J.line !== line && end.kind === 'line') continue;
     const dpx = screenLength(fv, J.u - u, J.v - v);
     const reach = J.singular ? 1 : 0.5;
     if (dpx <= reach && dpx < bestPx) {

@@ -42,3 +42,24 @@ describe('tracer topology on the curve table', () => {
     }
   }
 });
+
+describe('the same table at device-pixel ratio 2 and at 1920 px (exact landmarks)', () => {
+  for (const c of TOPOLOGY_CASES) {
+    // Ovals and excursions below a pixel change with the pixel size: their counts are checked above.
+    if (/pixel|oval below|just cut/.test(c.name)) continue;
+    for (const [w, h, dpr] of [[800, 600, 2], [1920, 1440, 1]] as const) {
+      it(`${c.name} at ${w}x${h}, dpr ${dpr}`, () => {
+        const form = caseForm(c);
+        const view = { ...caseView(c), width: w, height: h, dpr };
+        const exact = c.scale === undefined && c.stretch === undefined;
+        const tr = curveTrace(curvePrepare(form, exact ? curveLandmarks(formParse(c.eq).form) : null), view);
+        const summary = { open: tr.polylines.filter((p) => !p.closed).length, closed: tr.polylines.filter((p) => p.closed).length, dots: tr.dots.length };
+        expect(summary).toEqual({ open: c.open, closed: c.closed, dots: c.dots });
+        const faults = traceFaults(affineEvaluator(form.degree, form.coeffs), view, tr, (c.exclusionPx ?? 4) * (w / 800) * dpr);
+        expect(faults.worstDistancePx).toBeLessThanOrEqual(0.25);
+        expect(faults.worstGapPx).toBeLessThanOrEqual(2);
+        expect(faults.closeApproaches).toBe(0);
+      });
+    }
+  }
+});
