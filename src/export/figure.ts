@@ -112,6 +112,15 @@ export function dotShape(style: ItemStyle, role: 'isolated' | 'point'): DotShape
   return { ring: false, outline: role === 'point' && style.width > 0 && style.stroke !== style.fill };
 }
 
+/**
+ * The exact value to write beside a point's mark, or undefined: a point at infinity (Z = 0) is marked at
+ * the view's edge in its direction, which is not its place, so its mark carries no coordinates.
+ */
+export function dotExactNote(fact: { readonly exact?: string } | undefined, role: 'isolated' | 'point'): string | undefined {
+  if (!fact?.exact || role !== 'point') return undefined;
+  return /:0$/.test(fact.exact) ? undefined : fact.exact;
+}
+
 /** The outline of a disc on paper: a light (paper-coloured) outline prints white, never grey. */
 export function outlineInk(colour: string, greyscale: boolean): string {
   const ink = inkOf(colour, false);

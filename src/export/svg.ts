@@ -2,7 +2,7 @@
 // written as escaped text (a label "<script>" stays those characters, it never becomes markup); the exact
 // facts of the scene go into <metadata> (as JSON) and into one comment line per object.
 import type { DisplayItem } from '../../shaders-free-render/display-list.ts';
-import { dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
+import { dotExactNote, dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
 
 /** Text for XML content and attribute values: the five special characters escaped, control characters dropped. */
 export function xmlText(s: string): string {
@@ -68,7 +68,8 @@ function itemSvg(input: FigureInput, f: PageFrame, item: DisplayItem, fact: Figu
     case 'dot': {
       const r = num(Math.max(0.6, s.radius * f.ptPerPx), 2);
       const at = `cx="${num(f.u(item.x))}" cy="${num(f.v(item.y))}" r="${r}"`;
-      const exact = fact?.exact && item.role === 'point' ? ` data-exact="${xmlText(fact.exact)}"` : '';
+      const note = dotExactNote(fact, item.role);
+      const exact = note ? ` data-exact="${xmlText(note)}"` : '';
       const shape = dotShape(s, item.role);
       if (shape.ring) return `<circle${owner}${exact} ${at} fill="none" stroke="${stroke}" stroke-width="${width}"${dash}/>`;
       const fill = inkOf(s.fill, f.greyscale);

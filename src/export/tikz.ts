@@ -4,7 +4,7 @@
 // carries everything it needs. Labels are escaped for LaTeX, so no label can run as a command. The exact
 // facts of the scene are written as % comments, one line per object.
 import type { DisplayItem } from '../../shaders-free-render/display-list.ts';
-import { dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
+import { dotExactNote, dotShape, greyscaleDistinguish, inkOf, num, outlineInk, pageFrame, polylineThin, styleOf, type FigureFact, type FigureInput, type PageFrame } from './figure.ts';
 import { factLine } from './svg.ts';
 
 const LATEX_SPECIAL: Record<string, string> = {
@@ -124,7 +124,8 @@ function itemTikz(input: FigureInput, f: PageFrame, item: DisplayItem, fact: Fig
     case 'dot': {
       const r = num(Math.max(0.6, s.radius * f.ptPerPx), 2);
       const at = `(${num(f.u(item.x), 2)},${num(V(item.y), 2)})`;
-      const note = fact?.exact && item.role === 'point' ? ` % ${fact.label.replace(/[\r\n]+/g, ' ')} = ${fact.exact}` : '';
+      const exact = dotExactNote(fact, item.role);
+      const note = exact ? ` % ${fact!.label.replace(/[\r\n]+/g, ' ')} = ${exact}` : '';
       const shape = dotShape(s, item.role);
       if (shape.ring) return [`\\draw[${opts}] ${at} circle[radius=${r}pt];${note}`];
       const outline = shape.outline ? `, draw=${colour(outlineInk(s.stroke, f.greyscale))}, ${width}` : '';

@@ -66,6 +66,14 @@ describe('SVG export', () => {
     expect(svg).toContain('data-exact="1:2:1"');
     expect(svg).toContain('coefficients (1, 0)');
   });
+  it('writes no coordinates beside the mark of a point at infinity (it is drawn at the edge, not at its place)', () => {
+    const base = input('P');
+    const atInfinity: FigureInput = { ...base, facts: base.facts.map((f) => (f.id === 'p1' ? { ...f, exact: '1:2:0' } : f)) };
+    const svg = figureToSvg(atInfinity);
+    expect(svg).toMatch(/<circle data-owner="p1" cx="225" cy="45"/);
+    expect(svg).not.toContain('data-exact=');
+    expect(svg).toContain('1:2:0'); // the fact itself is still written
+  });
   it('maps world to page points: 8 x 6 world units on 360 pt -> 45 pt per unit, y down', () => {
     const svg = figureToSvg(input('P'));
     expect(svg).toMatch(/width="360pt" height="270pt" viewBox="0 0 360 270"/);

@@ -1,7 +1,8 @@
 // The display list of a construction: status marks that survive greyscale, lines clipped to the view,
 // labels that never overlap, helpers and failures handled.
 import { describe, expect, it } from 'vitest';
-import { lineClip, sceneDisplay, viewBounds } from '../../../src/ui/display.ts';
+import { HIGHLIGHT_PREFIX, sceneDisplay, viewBounds } from '../../../src/ui/display.ts';
+import { constructionDisplayList, lineClip } from '../../../src/export/display.ts';
 import { constructionAdd, constructionEmpty } from '../../../src/construct/graph.ts';
 import { constructionEvaluate } from '../../../src/construct/evaluate.ts';
 import type { View } from '../../../src/ui/stores/interaction.ts';
@@ -66,8 +67,83 @@ describe('sceneDisplay', () => {
   });
   it('clips lines to the view box', () => {
     const box = viewBounds(view); // x in [-6, 6], y in [-4, 4]
-    expect(lineClip([0, 1, -1], box)).toEqual([-6, 1, 6, 1]); // y = 1
-    expect(lineClip([1, 0, 0], box)?.map((v) => v + 0)).toEqual([0, -4, 0, 4]); // x = 0
+    const sorted = (s: number[] | null) => s && [[s[0], s[1]], [s[2], s[3]]].sort((a, b) => a[0] - b[0] || a[1] - b[1]).flat().map((v) => +v.toFixed(12) + 0);
+    expect(sorted(lineClip([0, 1, -1], box))).toEqual([-6, 1, 6, 1]); // y = 1
+    expect(sorted(lineClip([1, 0, 0], box))).toEqual([0, -4, 0, 4]); // x = 0
     expect(lineClip([0, 1, -10], box)).toBeNull(); // y = 10 misses the view
+  });
+});
+
+describe('the canvas draws the figure list plus highlights only', () => {
+  // One builder decides how a construction is drawn (src/export/display.ts); the canvas adds page-only
+  // layers under and over it. On every demo scene and under every kind of highlight, the canvas list minus
+  // its highlight items must be the figure list of the same view, item for item and in order, with the
+  // same styles (common practice: one display list feeds every backend, DESIGN.md).
+  it('on every demo scene, with selection, hover, picks, search finds, blow-up and region', async () => {
+    const { readFileSync, readdirSync } = await import('node:fs');
+    const { sceneParse } = await import('../../../src/scene/load.ts');
+    const dir = new URL('../../../scenes/', import.meta.url);
+    const files = readdirSync(dir).filter((f) => f.endsWith('.json') && f !== 'index.json');
+    expect(files.length).toBeGreaterThanOrEqual(6);
+    const canvasView: View = { cx: 1.25, cy: 0.5, scale: 50, width: 640, height: 480 };
+    for (const file of files) {
+      const scene = sceneParse(readFileSync(new URL(file, dir), 'utf8'));
+      const values = constructionEvaluate(scene.doc);
+      const box = viewBounds(canvasView);
+      const figureView = { ...box, widthPx: 640, heightPx: 480 };
+      const figure = constructionDisplayList(scene.doc, values, figureView);
+      const ids = scene.doc.objects.filter((o) => values.get(o.id)?.type !== 'failure').map((o) => o.id);
+      const ofType = (t: string) => scene.doc.objects.filter((o) => o.type === t && figure.items.some((i) => i.owner === o.id)).map((o) => o.id);
+      const [curve] = ofType('curve');
+      const [point, other] = ofType('point');
+      const [line] = ofType('line');
+      const cases = [
+        { name: 'no highlights', extras: { selection: new Set<string>(), hover: null, picks: [] } },
+        {
+          name: 'selection, hover, picks and page marks',
+          extras: {
+            selection: new Set([curve, point, line].filter(Boolean)),
+            hover: other ?? curve ?? null,
+            picks: ids.slice(0, 2),
+            found: [{ x: 0.5, y: 0.25, finite: true }, { x: 1, y: 0, finite: false }],
+            region: { x0: -1, y0: -1, x1: 2, y1: 1.5 },
+            blowup: { singular: { x: 0, y: 0, finite: true }, point: { x: 1, y: 1, finite: true }, tangents: [[1, -1, 0], [1, 1, 0]] as [number, number, number][] },
+          },
+        },
+      ];
+      for (const c of cases) {
+        const canvas = sceneDisplay(scene.doc, values, canvasView, c.extras);
+        const base = constructionDisplayList(scene.doc, values, figureView, { labelFirst: c.extras.selection });
+        const msg = `${file}, ${c.name}`;
+        const isHighlight = (key: string) => key.startsWith(HIGHLIGHT_PREFIX);
+        expect(canvas.items.filter((i) => !isHighlight(i.style)), msg).toEqual(base.items);
+        for (const [k, st] of Object.entries(base.styles)) expect(canvas.styles[k], `${msg}, style ${k}`).toEqual(st);
+        expect(Object.keys(base.styles).some(isHighlight), msg).toBe(false);
+        // Highlights are marks, never labels, and each names a style of its own layer.
+        const extra = canvas.items.filter((i) => isHighlight(i.style));
+        expect(extra.every((i) => i.kind !== 'label' && canvas.styles[i.style] !== undefined), msg).toBe(true);
+        if (c.name === 'no highlights') {
+          expect(extra, msg).toEqual([]);
+          expect(base, msg).toEqual(figure); // no selection: the very list a figure of this view draws
+        } else {
+          for (const id of [curve, point, line].filter(Boolean)) expect(extra.some((i) => i.owner === id), `${msg}: ${id} has a halo`).toBe(true);
+          expect(extra.filter((i) => i.kind === 'dot' && i.owner === undefined).length, `${msg}: one finite search find`).toBe(1);
+          expect(extra.some((i) => i.style === `${HIGHLIGHT_PREFIX}region`), msg).toBe(true);
+        }
+      }
+    }
+  });
+  it('shows a point at infinity at the view edge in both lists, labelled as such', () => {
+    let doc = constructionEmpty();
+    const r = constructionAdd(doc, { construction: { kind: 'point-free', parents: [], params: { at: '1:1:0' } }, label: 'P' });
+    doc = r.doc;
+    const values = constructionEvaluate(doc);
+    const box = viewBounds(view);
+    const figure = constructionDisplayList(doc, values, { ...box, widthPx: view.width, heightPx: view.height });
+    const mark = figure.items.find((i) => i.owner === r.id && i.kind === 'dot');
+    expect(mark && mark.kind === 'dot' && mark.x > 0 && mark.y > 0 && mark.y <= box.ymax).toBe(true);
+    expect(figure.items.some((i) => i.kind === 'label' && i.text === 'P at \u221e')).toBe(true);
+    const canvas = sceneDisplay(doc, values, view, none);
+    expect(canvas.items).toEqual(figure.items);
   });
 });
