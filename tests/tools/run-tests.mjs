@@ -1,8 +1,9 @@
-// `npm test`: make sure the reference systems are present (installing them through apt as root), run
-// every vitest suite (unit, reference, e2e) once, and print one closing line of totals taken from
-// vitest's JSON report: "tests: N passed, M failed".
+// `npm test`: make sure the reference systems are present (installing them through apt as root), run the
+// unit and reference suites, then the browser suite on its own (one file at a time, so Chromium never
+// competes with PARI and Singular for the two cores), and print one closing line of totals taken from
+// vitest's JSON reports: "tests: N passed, M failed". Extra arguments go to both vitest runs.
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, readFileSync, existsSync } from 'node:fs';
+import { mkdirSync, readFileSync, existsSync, rmSync } from 'node:fs';
 import { ensureOracles } from './oracles.mjs';
 
 const missing = ensureOracles();
@@ -14,27 +15,36 @@ if (missing.length > 0) {
 }
 
 mkdirSync('test-output', { recursive: true });
-const report = 'test-output/vitest.json';
 const extra = process.argv.slice(2);
-const run = spawnSync(
-  'npx',
-  ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extra],
-  { stdio: 'inherit' },
-);
+const RUNS = [
+  { name: 'unit and reference', report: 'test-output/vitest-core.json', args: ['tests/unit', 'tests/reference'] },
+  { name: 'browser', report: 'test-output/vitest-e2e.json', args: ['tests/e2e', '--no-file-parallelism'] },
+];
 
 let passed = 0;
 let failed = 0;
-if (existsSync(report)) {
-  const json = JSON.parse(readFileSync(report, 'utf8'));
-  passed = json.numPassedTests ?? 0;
-  failed = json.numFailedTests ?? 0;
-  // A suite that fails to load has no tests of its own; count it as a failure so it cannot hide.
+let ok = true;
+for (const r of RUNS) {
+  rmSync(r.report, { force: true });
+  console.error(`\n== ${r.name} tests`);
+  const run = spawnSync(
+    'npx',
+    ['vitest', 'run', ...r.args, '--reporter=default', '--reporter=json', `--outputFile.json=${r.report}`, ...extra],
+    { stdio: 'inherit' },
+  );
+  if (run.status !== 0) ok = false;
+  if (!existsSync(r.report)) {
+    failed += 1;
+    ok = false;
+    continue;
+  }
+  const json = JSON.parse(readFileSync(r.report, 'utf8'));
+  passed += json.numPassedTests ?? 0;
+  failed += json.numFailedTests ?? 0;
+  // A file that fails to load has no tests of its own; count it as a failure so it cannot hide.
   for (const file of json.testResults ?? []) {
     if (file.status === 'failed' && (file.assertionResults ?? []).length === 0) failed += 1;
   }
-} else {
-  failed = 1;
 }
-const code = run.status === 0 && failed === 0 ? 0 : 1;
 console.log(`tests: ${passed} passed, ${failed} failed`);
-process.exit(code);
+process.exit(ok && failed === 0 ? 0 : 1);
