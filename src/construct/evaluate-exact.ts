@@ -2,7 +2,8 @@
 // src/poly, src/cubic). Each returns an exact value, or an algebraic one where the answer is a real
 // algebraic point; failures are thrown as NinefoldErrors and become the object's message.
 // Internal tier: the input passed constructionCheckShape (graph.ts) and no parent failed.
-import { Degenerate, InvalidInput, NotOnCurve } from '../exact/errors.ts';
+import { Degenerate, InvalidInput, NinefoldError, NotOnCurve } from '../exact/errors.ts';
+import type { WeierstrassModel } from '../cubic/weierstrass.ts';
 import { conicThroughFive } from '../plane/conic.ts';
 import { curvesThroughPoints } from '../plane/linear-system.ts';
 import { ninthPoint } from '../cubic/nine.ts';
@@ -22,6 +23,8 @@ import { ratToString } from '../exact/rational.ts';
 import type { CheckValue, CurveValue, LineValue, ObjectValue, PointValue } from './types.ts';
 import type { Line } from '../plane/point.ts';
 import { evaluateCheckExact } from './checks.ts';
+import { meetPointChoose } from './meet-identity.ts';
+import { weierstrassImage, weierstrassModelForm, weierstrassModelOf } from './weierstrass-kinds.ts';
 
 export function exactPoint(p: Point, multiplicity?: number): PointValue {
   return { type: 'point', status: 'exact', exact: p, approx: f3ToApprox(f3FromBig(p)), ...(multiplicity ? { multiplicity } : {}) };
@@ -79,6 +82,16 @@ export function parametrisationOf(f: Form, label = 'the curve'): CubicParametris
   return p;
 }
 
+/** The Weierstrass model of parents[0] from parents[1], its failures told with the objects' labels. */
+function modelOf(parents: readonly ObjectValue[], labels: readonly string[]): WeierstrassModel {
+  try {
+    return weierstrassModelOf(curveOf(parents[0]), pointOf(parents[1]));
+  } catch (e) {
+    if (e instanceof NinefoldError) throw new InvalidInput(`no Weierstrass model of ${labels[0]} from ${labels[1]}: ${e.message}`, e.where === 'base' ? 'parents[1]' : 'parents[0]');
+    throw e;
+  }
+}
+
 type Exact = (input: EvalInput) => ObjectValue;
 
 const EXACT: Partial<Record<string, Exact>> = {
@@ -110,7 +123,14 @@ const EXACT: Partial<Record<string, Exact>> = {
   'point-parameter': ({ parents, params, labels }) => {
     const [s, t] = memberParse(params.at, 'at', 'a parameter value');
     const par = parametrisationOf(curveOf(parents[0]), labels[0]);
-    return exactPoint(parametrisationAt(par, s, t));
+    // The basis is kept as small integers (not made unit): s·D1 + t·D2 must mean what it means exactly.
+    const pencil = { singular: f3FromBig(par.singular), basis: [par.basis[0].map(Number), par.basis[1].map(Number)] as const };
+    return { ...exactPoint(parametrisationAt(par, s, t)), pencil };
+  },
+  'curve-weierstrass': ({ parents, labels }) => exactCurve(weierstrassModelForm(modelOf(parents, labels))),
+  'point-weierstrass-image': ({ parents, labels }) => {
+    const model = modelOf(parents, labels);
+    return exactPoint(weierstrassImage(model, pointOf(parents[2]), labels[2]));
   },
   'point-free': ({ params }) => exactPoint(pointParse(params.at, 'at')),
   'line-equation': ({ params }) => exactLine(pointParse(params.at, 'at')),
@@ -153,9 +173,12 @@ const EXACT: Partial<Record<string, Exact>> = {
     const m = a.type === 'line' ? lineCurveMeet(curveOf(b), lineOf(a)) : b.type === 'line' ? lineCurveMeet(curveOf(a), lineOf(b)) : curveCurveMeet(curveOf(a), curveOf(b));
     if (m.commonComponent) throw new InvalidInput(`${input.labels[0]} and ${input.labels[1]} share a component: ${m.note}`, 'parents');
     const real = m.points.filter((q) => q.real);
-    const k = Number(input.params.index);
-    const q = real[k];
-    if (!q) throw new InvalidInput(`${input.labels[0]} and ${input.labels[1]} have ${real.length} real meet point${real.length === 1 ? '' : 's'} now; this one (number ${k + 1}) is gone`, 'index');
+    // Which of them: the rule of types.ts (MEET IDENTITY), in meet-identity.ts.
+    const q = real[meetPointChoose(real, input.params, input.previous)];
+    if (!q) {
+      const k = Number(input.params.index);
+      throw new InvalidInput(`${input.labels[0]} and ${input.labels[1]} have ${real.length} real meet point${real.length === 1 ? '' : 's'} now; this one (number ${k + 1}) is gone`, 'index');
+    }
     if (q.point) return exactPoint(q.point, q.multiplicity);
     return {
       type: 'point',

@@ -1,6 +1,8 @@
 // Float shadows of the construction kinds: used while a point is dragged (status 'approximate') and for
 // objects built from algebraic points (status 'algebraic', shown by their approximation). A kind without a
-// shadow returns null and keeps its last value (evaluate.ts).
+// shadow returns null and keeps its last value (evaluate.ts); so does a shadow that cannot follow (a meet
+// point whose Newton iteration stops converging). Only 'curve-weierstrass' has none: the model of a moving
+// curve is not a float computation (its coordinates come from a kernel and a minimal model over Q).
 // Internal tier: the input passed constructionCheckShape and no parent failed.
 import { pointParse } from '../plane/parse-point.ts';
 import { evaluateCheckFloat } from './checks.ts';
@@ -24,7 +26,12 @@ import {
   type F3,
   type FloatForm,
 } from './float.ts';
-import type { CurveValue, ObjectValue, PointApprox, Status } from './types.ts';
+import type { CurveValue, ObjectValue, PointApprox, PointValue, Status } from './types.ts';
+import { NinefoldError } from '../exact/errors.ts';
+import { curveCurveMeetFollow } from './float-meet.ts';
+import { ninthPointFloat, pencilMemberFloat } from './float-pencil.ts';
+import { curveSingularFollow, parametrisationAtFloat } from './float-parameter.ts';
+import { weierstrassImageFloat, weierstrassModelOf } from './weierstrass-kinds.ts';
 
 function curveF(v: ObjectValue): FloatForm {
   const c = v as CurveValue;
@@ -70,9 +77,12 @@ const SHADOWS: Partial<Record<string, Shadow>> = {
   'point-meet': ({ parents, previous }, status) => {
     const [a, b] = parents;
     if (a.type === 'line' && b.type === 'line') return point(status, f3Cross(lineF(a), lineF(b)), 1);
-    if (a.type === 'curve' && b.type === 'curve') return null;
-    // Follow the point continuously: of the float meets, the one nearest the last value.
+    // Follow the point continuously from its last value (types.ts, MEET IDENTITY), never by index.
     if (!previous || previous.type !== 'point') return null;
+    if (a.type === 'curve' && b.type === 'curve') {
+      const q = curveCurveMeetFollow(curveF(a), curveF(b), f3FromApprox(previous.approx));
+      return q ? point(status, q, previous.multiplicity) : null;
+    }
     const [l, c] = a.type === 'line' ? [a, b] : [b, a];
     const was = f3FromApprox(previous.approx);
     const pts = lineCurveMeetFloat(curveF(c), lineF(l));
@@ -88,6 +98,47 @@ const SHADOWS: Partial<Record<string, Shadow>> = {
     const n = Number(params.n);
     if (!Number.isInteger(n) || Math.abs(n) > 64) return null; // beyond that doubles say nothing useful
     return point(status, cubicMultipleFloat(curveF(parents[0]), pointF(parents[1]), pointF(parents[2]), n));
+  },
+  'point-ninth': ({ parents }, status) => {
+    const q = ninthPointFloat(parents.map(pointF));
+    return q ? point(status, q) : null;
+  },
+  'pencil-member': ({ parents, params, previous }, status) => {
+    const m = /^\s*([+-]?\d+)\s*:\s*([+-]?\d+)\s*$/.exec(params.member);
+    if (!m) return null;
+    const was = previous?.type === 'curve' && previous.approx.length === 10 ? previous.approx : undefined;
+    const f = pencilMemberFloat(parents.map(pointF), Number(m[1]), Number(m[2]), was);
+    return f ? { type: 'curve', status, approx: f.coeffs } : null;
+  },
+  'point-parameter': ({ parents, params, previous }, status) => {
+    // Follows from the last value's singular point and pencil basis (set by the exact evaluation).
+    const m = /^\s*([+-]?\d+)\s*:\s*([+-]?\d+)\s*$/.exec(params.at);
+    const pencil = previous?.type === 'point' ? previous.pencil : undefined;
+    if (!m || !pencil) return null;
+    const f = curveF(parents[0]);
+    if (f.degree !== 3) return null;
+    const singular = curveSingularFollow(f, pencil.singular as F3);
+    if (!singular) return null;
+    const q = parametrisationAtFloat(f, singular, pencil.basis[0], pencil.basis[1], Number(m[1]), Number(m[2]));
+    if (!q) return null;
+    const v = point(status, q);
+    return v ? { ...(v as PointValue), pencil: { singular, basis: pencil.basis } } : null;
+  },
+  'point-weierstrass-image': ({ parents }, status) => {
+    // The map is known exactly only for an exact curve and base point; then the forward forms are
+    // evaluated at the moving point in doubles. Otherwise the image keeps its last value.
+    const c = parents[0] as CurveValue;
+    const o = parents[1] as PointValue;
+    if (!c.form || !o.exact) return null;
+    let model;
+    try {
+      model = weierstrassModelOf(c.form, o.exact);
+    } catch (e) {
+      if (e instanceof NinefoldError) return null;
+      throw e;
+    }
+    const q = weierstrassImageFloat(model, pointF(parents[2]));
+    return q ? point(status, q) : null;
   },
   'conic-through-five': curveThrough(2),
   'cubic-through-nine': curveThrough(3),

@@ -7,7 +7,8 @@
 //   - some parent algebraic      -> the float shadow, status 'algebraic' (the object is a real algebraic one;
 //                                   we show its approximation and say so);
 //   - some parent approximate    -> the float shadow, status 'approximate' (a drag in progress);
-//   - a kind with no float shadow keeps its last value, marked approximate, until exact data returns;
+//   - a kind with no float shadow (or a shadow that cannot follow this step) keeps its last value, marked
+//     approximate, until exact data returns;
 //   - a parent that failed makes its children fail with "waits for ...".
 // Only objects downstream of `changed` are recomputed when `previous` values are given.
 import { NinefoldError } from '../exact/errors.ts';
@@ -119,5 +120,5 @@ function staleValue(input: EvalInput, status: Status): ObjectValue {
   // Drop the exact part: it belonged to the old parents.
   if (prev.type === 'curve') return { type: 'curve', status, approx: prev.approx };
   if (prev.type === 'line') return { type: 'line', status, approx: prev.approx };
-  return { type: 'point', status, approx: prev.approx, ...(prev.multiplicity ? { multiplicity: prev.multiplicity } : {}) };
+  return { type: 'point', status, approx: prev.approx, ...(prev.multiplicity ? { multiplicity: prev.multiplicity } : {}), ...(prev.pencil ? { pencil: prev.pencil } : {}) };
 }

@@ -77,7 +77,8 @@ export function floatFormEval(f: FloatForm, x: number, y: number, z: number): nu
 
 const GRADIENTS = new WeakMap<FloatForm, readonly [FloatForm, FloatForm, FloatForm]>();
 
-function floatPartial(f: FloatForm, v: 0 | 1 | 2): FloatForm {
+/** ∂F/∂(X, Y or Z) of a float form. */
+export function floatFormPartial(f: FloatForm, v: 0 | 1 | 2): FloatForm {
   const d = f.degree;
   const out = new Array<number>(((d) * (d + 1)) / 2).fill(0);
   const m = monomials(d);
@@ -92,7 +93,7 @@ function floatPartial(f: FloatForm, v: 0 | 1 | 2): FloatForm {
 export function formGradientFloat(f: FloatForm, p: F3): F3 {
   let g = GRADIENTS.get(f);
   if (!g) {
-    g = [floatPartial(f, 0), floatPartial(f, 1), floatPartial(f, 2)];
+    g = [floatFormPartial(f, 0), floatFormPartial(f, 1), floatFormPartial(f, 2)];
     GRADIENTS.set(f, g);
   }
   return [floatFormEval(g[0], p[0], p[1], p[2]), floatFormEval(g[1], p[0], p[1], p[2]), floatFormEval(g[2], p[0], p[1], p[2])];

@@ -35,13 +35,16 @@ export type ConstructionKind =
   | 'conic-through-five' //   parents [5 points]
   | 'cubic-through-nine' //   parents [9 points]
   | 'pencil-member' //        parents [8 points]; params { member: "s:t" } — the member s·F1 + t·F2 of the pencil
+  | 'curve-weierstrass' //    parents [curve C, point O]: the Weierstrass model of the smooth cubic C from its rational
+  //                          point O, as a plane cubic: the reduced minimal model's long form
+  //                          Y²Z + a1·XYZ + a3·YZ² = X³ + a2·X²Z + a4·XZ² + a6·Z³ (what the maps go to)
   // points
   | 'point-free' //           parents []; params { at: "X:Y:Z" }
   | 'point-on-curve' //       parents [curve]; params { at: "X:Y:Z" } (a rational point of the curve), or
   //                          params { x: "rational", near: "rational" }: the real point of the curve on the
   //                          vertical line at x whose ordinate is nearest `near` (algebraic in general)
-  | 'point-meet' //           parents [a, b] (line or curve each); params { index: "k" } — the k-th meet point
-  //                          in the order of `meetOrder` (graph.ts documents it)
+  | 'point-meet' //           parents [a, b] (line or curve each); params { index: "k", near?: "X:Y:Z" } — one
+  //                          real meet point, kept by identity (the rule is below, MEET IDENTITY)
   | 'point-third' //          parents [curve, P, Q]: the third point P*Q of the chord (tangent when P = Q)
   | 'point-sum' //            parents [curve, O, P, Q]: P + Q with base point O
   | 'point-multiple' //       parents [curve, O, P]; params { n: "integer" }: nP with base point O
@@ -49,6 +52,8 @@ export type ConstructionKind =
   | 'point-ninth' //          parents [8 points]: the ninth base point of the pencil of cubics through them
   | 'point-parameter' //      parents [curve]; params { at: "s:t" }: the point with parameter (s:t) of a
   //                          nodal or cuspidal cubic's parametrisation through its singular point
+  | 'point-weierstrass-image' // parents [curve C, point O, point P]: the image of P on the Weierstrass model of C
+  //                          with base point O (src/cubic/weierstrass.ts); O goes to (0:1:0)
   // lines
   | 'line-through-two' //     parents [P, Q]
   | 'line-tangent' //         parents [curve, P]: the tangent at a smooth point P of the curve
@@ -60,6 +65,18 @@ export type ConstructionKind =
   | 'check-equal' //          parents [P, Q]
   | 'check-nine' //           parents [9 points]: do they form the base of a pencil of cubics?
   | 'check-associative'; //   parents [curve, O, P, Q, R]: (P+Q)+R = P+(Q+R)
+
+// MEET IDENTITY. A 'point-meet' names one real meet point of its two parents, chosen when it is
+// computed exactly by the first rule that applies:
+//   1. coming out of a drag (its last value is approximate): the exact real meet point nearest that
+//      float position, so the point that was followed during the drag is the one kept after the drop;
+//   2. params.near ("X:Y:Z", integers; written by `constructionMeetsSettle` in meet-identity.ts from the
+//      point's position when a drag ends): the exact real meet point nearest it;
+//   3. params.index ("k"): the k-th real meet point in the order of src/cubic/meet.ts (rational points by
+//      height, then real algebraic ones by their float coordinates). Files without "near" load as before.
+// "Nearest" is the angle between the points as unit vectors of R³ (projective: points at infinity
+// need no special case). During a drag the point is followed by continuity from its last position
+// (float-meet.ts), never by index.
 
 export interface Construction {
   readonly kind: ConstructionKind;
@@ -128,6 +145,9 @@ export interface PointValue {
   readonly approx: PointApprox;
   /** Intersection multiplicity, for meet points. */
   readonly multiplicity?: number;
+  /** Parameter points only: the singular point and the pencil basis D1, D2 of the parametrisation, as
+   * unit float triples, kept so the float version follows the point while its curve moves. */
+  readonly pencil?: { readonly singular: readonly number[]; readonly basis: readonly [readonly number[], readonly number[]] };
 }
 
 export interface LineValue {
