@@ -1,13 +1,13 @@
-// The page's single wiring point: restore the open construction, keep it saved, mount the app, and expose
+// The page's single wiring point: restore the open scene, keep it saved, mount the app, and expose
 // a small hook for the browser tests (window.__ninefold).
 import { constructionEmpty, constructionObject, constructionValidate } from '../construct/graph.ts';
 import type { ObjectValue } from '../construct/types.ts';
-import { $doc, $history, $values, docBackgroundInstall, docReset } from './stores/construction.ts';
+import { $doc, $values, docBackgroundInstall, docReset } from './stores/construction.ts';
 import { workerBackground } from './evaluate-client.ts';
 import { $selection, $tool, $view, noticeShow, worldToScreen } from './stores/interaction.ts';
 import { $search } from './stores/search.ts';
-import { STORAGE_KEY, persistRestore, persistSave } from './persist.ts';
-import { NinefoldError } from '../exact/errors.ts';
+import { persistForget, persistKeep, persistRestore, persistStorage } from './persist.ts';
+import { $sceneMeta, SCENE_META_DEFAULT } from './scene-file/bridge.ts';
 import { frameLog, frameParts } from './components/nf-canvas.ts';
 import './components/nf-app.ts';
 import './scene-file/wire.ts'; // E8 wiring: scene panel (file, figure, trials) in the side bar; default demo scene when nothing was restored
@@ -18,25 +18,16 @@ function start(): void {
   const width = Math.max(200, window.innerWidth - 550);
   const height = Math.max(200, window.innerHeight - 44);
   $view.set({ ...$view.get(), width, height });
-  try {
-    const restored = persistRestore(window.localStorage, width, height);
-    docReset(restored ? restored.doc : constructionEmpty());
-    if (restored) {
-      $view.set({ ...$view.get(), ...restored.view });
-      noticeShow('info', `Restored the open construction (${restored.doc.objects.length} objects).`, 'canvas');
-    }
-  } catch (e) {
-    docReset(constructionEmpty());
-    if (e instanceof NinefoldError) noticeShow('error', `The stored construction could not be restored (${e.message}${e.where ? `, at ${e.where}` : ''}); it is kept aside in the browser's storage.`, 'canvas');
-    else throw e;
+  const storage = persistStorage();
+  docReset(constructionEmpty());
+  const restored = persistRestore(storage);
+  if (restored.kind === 'restored') {
+    noticeShow('info', `Restored the open scene "${restored.scene.title}" (${restored.scene.doc.objects.length} objects)${restored.migrated ? ', moved from the older storage' : ''}.`, 'canvas');
+  } else if (restored.kind === 'unreadable') {
+    const e = restored.error;
+    noticeShow('error', `The stored scene could not be restored (${e.message}${e.where ? `, at ${e.where}` : ''}); it is kept aside in the browser's storage.`, 'canvas');
   }
-  let timer = 0;
-  const save = (): void => {
-    clearTimeout(timer);
-    timer = window.setTimeout(() => persistSave(window.localStorage, $doc.get(), $view.get()), 150);
-  };
-  $history.listen(save);
-  $view.listen(save);
+  persistKeep(storage);
   document.body.appendChild(document.createElement('nf-app'));
   installTestHook();
 }
@@ -73,8 +64,9 @@ function installTestHook(): void {
     },
     /** Start from an empty construction with the default view (tests begin from a known state). */
     reset: () => {
-      window.localStorage.removeItem(STORAGE_KEY);
+      persistForget(persistStorage());
       docReset(constructionEmpty());
+      $sceneMeta.set(SCENE_META_DEFAULT);
       $selection.set([]);
       $view.set({ ...$view.get(), cx: 0, cy: 0, scale: 60 });
     },

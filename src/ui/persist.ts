@@ -1,62 +1,63 @@
-// Keeping the open construction in the browser: written (as a scene file, src/scene) after every change,
-// read back at start, so a reload or a crash loses nothing. A stored text that no longer loads is kept
-// aside under another key and reported, never silently dropped.
-import { NinefoldError } from '../exact/errors.ts';
-import { ratToString } from '../exact/rational.ts';
-import { ratSnap } from '../construct/snap.ts';
-import { sceneParse } from '../scene/load.ts';
-import { sceneToText } from '../scene/save.ts';
-import type { Scene } from '../scene/scene.ts';
-import type { ConstructionDoc } from '../construct/types.ts';
-import type { View } from './stores/interaction.ts';
-import { viewBounds } from './display.ts';
-import { ratParse, ratToNumber } from '../exact/rational.ts';
+// Keeping the open scene in the browser: the whole scene as the page holds it (construction, title,
+// notes, view; src/ui/scene-file/bridge.ts) written as one autosave record (src/scene/autosave.ts) a
+// moment after each change, and read back at start. A stored record that does not load is kept aside and
+// reported, never half-restored, and never crashes the page.
+import { AUTOSAVE_KEY, sceneAutosaveRead, sceneAutosaveWrite, type AutosaveRead, type AutosaveStorage } from '../scene/autosave.ts';
+import { $history } from './stores/construction.ts';
+import { $view } from './stores/interaction.ts';
+import { $sceneMeta, sceneCurrent, sceneOpen } from './scene-file/bridge.ts';
 
-export const STORAGE_KEY = 'ninefold.open-construction';
-export const STORAGE_BROKEN_KEY = 'ninefold.open-construction.unreadable';
+/** Wait after a change before writing, so a burst of changes (a pan, typing a title) is one write. */
+export const PERSIST_DELAY_MS = 150;
 
-function boundText(x: number, view: View): string {
-  return ratToString(ratSnap(x, 0.5 / view.scale));
+/** Open the stored scene, if one loads (the stores' view must already have the canvas size). */
+export function persistRestore(storage: AutosaveStorage): AutosaveRead {
+  const r = sceneAutosaveRead(storage);
+  if (r.kind === 'restored') sceneOpen(r.scene);
+  return r;
 }
 
-export function persistText(doc: ConstructionDoc, view: View): string {
-  const b = viewBounds(view);
-  const scene: Scene = {
-    title: 'Open construction',
-    notes: '',
-    doc,
-    view: { xmin: ratParse(boundText(b.xmin, view)), xmax: ratParse(boundText(b.xmax, view)), ymin: ratParse(boundText(b.ymin, view)), ymax: ratParse(boundText(b.ymax, view)) },
+/** Write the open scene now; false when it could not be written (the stored record is then unchanged). */
+export function persistSaveNow(storage: AutosaveStorage): boolean {
+  return sceneAutosaveWrite(storage, sceneCurrent(), new Date());
+}
+
+/**
+ * Keep the open scene saved from now on: after any change of the construction, the view, the title or
+ * the notes, write it once things have been still for `delayMs`. Returns the function that stops it.
+ */
+export function persistKeep(storage: AutosaveStorage, delayMs = PERSIST_DELAY_MS): () => void {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const later = (): void => {
+    if (timer !== undefined) clearTimeout(timer);
+    timer = setTimeout(() => {
+      timer = undefined;
+      persistSaveNow(storage);
+    }, delayMs);
   };
-  return sceneToText(scene);
+  const stops = [$history.listen(later), $view.listen(later), $sceneMeta.listen(later)];
+  return () => {
+    if (timer !== undefined) clearTimeout(timer);
+    for (const stop of stops) stop();
+  };
 }
 
-export function persistSave(storage: Storage, doc: ConstructionDoc, view: View): void {
+/** Drop the stored record (a fresh start of the page). */
+export function persistForget(storage: AutosaveStorage): void {
   try {
-    storage.setItem(STORAGE_KEY, persistText(doc, view));
+    storage.removeItem(AUTOSAVE_KEY);
   } catch {
-    // Storage full or refused: the construction stays open; nothing to do but try again next change.
+    // storage refused: nothing was stored
   }
 }
 
-export interface Restored {
-  readonly doc: ConstructionDoc;
-  /** Centre and scale for a canvas of the given size. */
-  readonly view: Pick<View, 'cx' | 'cy' | 'scale'>;
-}
-
-/** The stored construction, null when there is none; throws NinefoldError (kept aside) when it does not load. */
-export function persistRestore(storage: Storage, width: number, height: number): Restored | null {
-  const text = storage.getItem(STORAGE_KEY);
-  if (!text) return null;
+/** The browser's local storage, or a do-nothing store when the browser refuses it (private modes). */
+export function persistStorage(): AutosaveStorage {
   try {
-    const scene = sceneParse(text);
-    const [x0, x1, y0, y1] = [scene.view.xmin, scene.view.xmax, scene.view.ymin, scene.view.ymax].map(ratToNumber);
-    const scale = Math.min(width / (x1 - x0), height / (y1 - y0));
-    return { doc: scene.doc, view: { cx: (x0 + x1) / 2, cy: (y0 + y1) / 2, scale: Number.isFinite(scale) && scale > 0 ? scale : 60 } };
-  } catch (e) {
-    storage.setItem(STORAGE_BROKEN_KEY, text);
-    storage.removeItem(STORAGE_KEY);
-    if (e instanceof NinefoldError) throw e;
-    throw new NinefoldError(`the stored construction could not be read: ${(e as Error).message}`, 'storage');
+    const s = window.localStorage;
+    if (s) return s;
+  } catch {
+    // fall through
   }
+  return { getItem: () => null, setItem: () => undefined, removeItem: () => undefined };
 }

@@ -198,6 +198,52 @@ describe('scenes in the page', () => {
     }
   });
 
+  it('keeps the whole open scene under one key; a damaged entry is kept aside without harm; an older entry moves once', async () => {
+    const page = await fresh();
+    const errors: string[] = [];
+    page.on('pageerror', (e) => errors.push(e.message));
+    const ready = () => page.waitForFunction(() => (window as any).__ninefold?.doc()?.objects?.length > 0, null, { timeout: 60_000 });
+    const stored = () => page.evaluate(() => Object.fromEntries(Object.keys(localStorage).filter((k) => k.startsWith('ninefold.')).sort().map((k) => [k, localStorage.getItem(k)])));
+    try {
+      await page.waitForTimeout(400); // the autosave runs 150 ms after a change
+      const first = await stored();
+      expect(Object.keys(first)).toEqual(['ninefold.autosave']);
+      const record = JSON.parse(first['ninefold.autosave']!);
+      expect(record.format).toBe('ninefold-autosave');
+      expect(record.scene.title).toBe(await page.locator('nf-scene-file input.title').inputValue());
+      expect(record.scene.view.xmin).toMatch(/^-?\d+(\/\d+)?$/);
+      // A damaged entry: the page starts (default demo), says so, and keeps the text aside.
+      const bad = '{"format":"ninefold-autosave","savedAt":"2026-01-01T00:00:00Z","scene":{"format":"ninefold-scene","version":2,"objects":[{"id":7}]}}';
+      await page.evaluate((t) => localStorage.setItem('ninefold.autosave', t), bad);
+      await page.reload();
+      await ready();
+      expect(await page.locator('nf-app .notice').textContent()).toMatch(/could not be restored/);
+      await page.waitForTimeout(400);
+      const after = await stored();
+      expect(after['ninefold.autosave.unreadable']).toBe(bad);
+      expect(JSON.parse(after['ninefold.autosave']!).scene.objects.length).toBeGreaterThan(0);
+      // An entry in the page's older keys (construction as a scene file, title and notes beside it).
+      const old = sceneParse(demo('pascal-line.json'));
+      await page.evaluate(
+        ([text, meta]) => {
+          localStorage.removeItem('ninefold.autosave');
+          localStorage.setItem('ninefold.open-construction', text);
+          localStorage.setItem('ninefold.open-scene-meta', meta);
+        },
+        [sceneToText({ ...old, title: 'Open construction', notes: '' }), JSON.stringify({ title: 'Six points, moved over', notes: 'from the older keys' })],
+      );
+      await page.reload();
+      await ready();
+      await expect.poll(() => page.locator('nf-scene-file input.title').inputValue(), { timeout: 10_000 }).toBe('Six points, moved over');
+      expect(await docOf(page)).toBe(JSON.stringify(JSON.parse(JSON.stringify(old.doc))));
+      const moved = await stored();
+      expect(Object.keys(moved).filter((k) => k !== 'ninefold.autosave.unreadable')).toEqual(['ninefold.autosave']);
+      expect(errors).toEqual([]);
+    } finally {
+      await page.close();
+    }
+  });
+
   it('exports the view as SVG, TikZ and PNG', async () => {
     const page = await fresh();
     try {

@@ -14,7 +14,10 @@ export interface SceneMeta {
   readonly notes: string;
 }
 
-export const $sceneMeta = atom<SceneMeta>({ title: 'Untitled scene', notes: '' });
+/** The title and notes of a page that has not opened a scene. */
+export const SCENE_META_DEFAULT: SceneMeta = Object.freeze({ title: 'Untitled scene', notes: '' });
+
+export const $sceneMeta = atom<SceneMeta>(SCENE_META_DEFAULT);
 
 /** The canvas view as exact bounds: each edge snapped to the simplest rational within a tenth of a pixel. */
 export function viewToScene(v: View): SceneView {

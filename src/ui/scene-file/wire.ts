@@ -1,36 +1,11 @@
 // The scene panel's wiring into the app, imported once by src/ui/main.ts: registers the panel, puts it
 // at the top of the app's side bar (unless the app's template already has it), and opens the default
-// demo scene when the page started with nothing restored. The page's own store keeps the open scene
-// saved (src/ui/persist.ts writes it as a scene file).
+// demo scene when the page started with nothing restored. src/ui/persist.ts keeps the whole open scene
+// (construction, title, notes, view) saved as one autosave record.
 import { $doc } from '../stores/construction.ts';
-import { $sceneMeta, sceneOpen, type SceneMeta } from './bridge.ts';
+import { sceneOpen } from './bridge.ts';
 import { DEMO_DEFAULT, demoScene } from './demos.ts';
 import './nf-scene-panel.ts';
-
-/** The title and notes of the open scene, kept beside the page's stored construction. */
-export const META_KEY = 'ninefold.open-scene-meta';
-
-function metaKeep(restore: boolean): void {
-  if (restore) {
-    try {
-      const raw = JSON.parse(localStorage.getItem(META_KEY) ?? 'null') as Partial<SceneMeta> | null;
-      if (raw && typeof raw.title === 'string' && typeof raw.notes === 'string') {
-        $sceneMeta.set({ title: raw.title.slice(0, 400), notes: raw.notes.slice(0, 20_000) });
-      }
-    } catch {
-      // no readable stored title: keep the default
-    }
-  }
-  const save = (m: SceneMeta): void => {
-    try {
-      localStorage.setItem(META_KEY, JSON.stringify(m));
-    } catch {
-      // storage refused: the title stays for this visit
-    }
-  };
-  save($sceneMeta.get());
-  $sceneMeta.listen(save);
-}
 
 /** Open the default demo scene when the construction is empty (a first visit, or nothing restored). */
 export function sceneOpenDefaultIfEmpty(): boolean {
@@ -60,8 +35,7 @@ function panelPlace(tries = 0): void {
 
 // After the app's start (main.ts runs it synchronously once its imports are done).
 setTimeout(() => {
-  // A restored construction gets its stored title and notes back; a fresh start opens the default demo.
-  const restored = !sceneOpenDefaultIfEmpty();
-  metaKeep(restored);
+  // A fresh start (nothing restored) opens the default demo.
+  sceneOpenDefaultIfEmpty();
   panelPlace();
 }, 0);
