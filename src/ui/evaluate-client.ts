@@ -1,46 +1,29 @@
-// Heavy objects (meets of two curves, large multiples) computed in a worker: the page's thread only sends
-// the document and takes the values back. A newer document ends the busy worker and starts afresh.
+// Heavy objects (meets of two curves, large multiples) computed in the job worker: the page's thread only
+// sends the document and takes the values back. A newer document ends the busy job and starts afresh.
 import type { ConstructionDoc, ObjectId, ObjectValue } from '../construct/types.ts';
-import type { EvaluateRequest, JobReply } from '../worker/jobs.ts';
+import type { JobReply } from '../worker/jobs.ts';
 import { noticeShow } from './stores/interaction.ts';
 import type { Background } from './stores/construction.ts';
+import { JobChannel } from './job-client.ts';
 
-let worker: Worker | null = null;
-let busy = false;
-let job = 0;
 let waiting: ((values: ReadonlyMap<ObjectId, ObjectValue>) => void) | null = null;
 
-function workerStart(): Worker {
-  const w = new Worker(new URL('../worker/job-worker.ts', import.meta.url), { type: 'module' });
-  w.onmessage = (e: MessageEvent<JobReply>) => {
-    const r = e.data;
-    if (r.job !== job) return;
-    busy = false;
-    if (r.kind === 'values') {
-      waiting?.(r.values);
-      noticeShow('done', 'The heavy objects are computed.', 'canvas');
-    }
-    else if (r.kind === 'error') noticeShow('error', r.message, 'canvas');
-    waiting = null;
-  };
-  w.onerror = (e) => {
-    busy = false;
-    worker = null;
-    noticeShow('error', `the background computation failed: ${e.message}`, 'canvas');
-  };
-  return w;
+function evaluateReply(r: JobReply): void {
+  if (r.kind === 'values') {
+    waiting?.(r.values);
+    noticeShow('done', 'The heavy objects are computed.', 'canvas');
+  } else if (r.kind === 'error') noticeShow('error', r.message, 'canvas');
+  if (r.kind !== 'progress') waiting = null;
 }
 
+const channel = new JobChannel(evaluateReply, (message) => {
+  waiting = null;
+  noticeShow('error', `the background computation failed: ${message}`, 'canvas');
+});
+
 export const workerBackground: Background = (doc: ConstructionDoc, done) => {
-  if (busy && worker) {
-    worker.terminate();
-    worker = null;
-  }
-  if (!worker) worker = workerStart();
-  job += 1;
-  busy = true;
+  if (channel.busy) channel.cancel();
   waiting = done;
-  const req: EvaluateRequest = { kind: 'evaluate', job, doc };
-  worker.postMessage(req);
+  channel.send({ kind: 'evaluate', doc });
   noticeShow('info', 'Computing the heavy objects in the background…', 'canvas');
 };

@@ -1,4 +1,5 @@
-// Running one job: the same code inside the worker and in Node tests. Pure apart from the `post` callback.
+// Running one job (evaluation, point search, theorem trials): the same code inside the worker and in Node
+// tests. Pure apart from the `post` callback.
 import { NinefoldError } from '../exact/errors.ts';
 import { ratParse } from '../exact/rational.ts';
 import { formFromCoeffs, monomialCount } from '../poly/form.ts';
@@ -7,11 +8,21 @@ import { cubicRationalPoints } from '../cubic/search.ts';
 import type { JobReply, JobRequest } from './jobs.ts';
 import { constructionEvaluate } from '../construct/evaluate.ts';
 import { constructionValidate } from '../construct/graph.ts';
+import { constructionTrials } from '../construct/trials.ts';
 
 export function jobRun(req: JobRequest, post: (reply: JobReply) => void): void {
   try {
     if (req.kind === 'evaluate') {
       post({ kind: 'values', job: req.job, values: constructionEvaluate(constructionValidate(req.doc)) });
+      return;
+    }
+    if (req.kind === 'trials') {
+      const report = constructionTrials(constructionValidate(req.doc), {
+        count: req.count,
+        seed: req.seed,
+        onProgress: (done, total, checks) => post({ kind: 'progress', job: req.job, done, total, checks }),
+      });
+      post({ kind: 'trials', job: req.job, report });
       return;
     }
     const n = req.coeffs.length;
@@ -36,6 +47,8 @@ export function jobRun(req: JobRequest, post: (reply: JobReply) => void): void {
     post({ kind: 'found', job: req.job, points: r.points.map(pointToString), note: r.note, complete: r.complete });
   } catch (e) {
     if (e instanceof NinefoldError) post({ kind: 'error', job: req.job, message: e.message, where: e.where });
-    else post({ kind: 'error', job: req.job, message: `the ${req.kind === 'search' ? 'search' : 'computation'} stopped: ${(e as Error).message}`, where: req.kind });
+    else post({ kind: 'error', job: req.job, message: `the ${JOB_WORDS[req.kind]} stopped: ${(e as Error).message}`, where: req.kind });
   }
 }
+
+const JOB_WORDS: Record<JobRequest['kind'], string> = { search: 'search', evaluate: 'computation', trials: 'trials' };

@@ -269,7 +269,7 @@ describe('scenes in the page', () => {
     }
   });
 
-  it('runs theorem trials in a worker: a theorem holds, a false claim fails and its counterexample opens', async () => {
+  it('runs theorem trials as a job of the job worker: a theorem holds, a false claim fails and its counterexample opens', async () => {
     const page = await fresh();
     try {
       await page.locator('nf-scene-panel summary', { hasText: 'Theorem trials' }).click();

@@ -1,5 +1,6 @@
 // "Try on random instances": every free point of the open scene re-drawn as a random exact point, every
-// check decided again, N times, in a worker, with a progress bar and a cancel button. The result says how
+// check decided again, N times, as a job of the job worker (src/worker), with a progress bar and a cancel
+// button. The result says how
 // many instances held; the first counterexample of a check opens or saves as a scene.
 import { LitElement, css, html } from 'lit';
 import { customElement, state } from 'lit/decorators.js';
@@ -10,7 +11,8 @@ import type { Scene } from '../../scene/scene.ts';
 import { theme } from '../components/theme.ts';
 import { sceneCurrent, sceneOpen } from '../scene-file/bridge.ts';
 import { fileDownload } from '../scene-file/files.ts';
-import type { TrialsReply, TrialsRequest } from './trials-job.ts';
+import type { JobReply } from '../../worker/jobs.ts';
+import { JobChannel } from '../job-client.ts';
 
 type Phase = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
 
@@ -39,14 +41,18 @@ export class NfTrials extends LitElement {
   @state() private total = 0;
   @state() private checks: readonly TrialCheckReport[] = [];
   @state() private note = '';
-  private worker: Worker | null = null;
-  private job = 0;
+  private readonly channel = new JobChannel(
+    (r) => this.reply(r),
+    (message) => {
+      this.phase = 'failed';
+      this.note = `The trials worker failed: ${message}`;
+    },
+  );
   /** The scene the running or last trials were made from (the counterexample keeps its title, view, styles). */
   private source: Scene | null = null;
 
   override disconnectedCallback(): void {
-    this.worker?.terminate();
-    this.worker = null;
+    this.channel.cancel();
     super.disconnectedCallback();
   }
 
@@ -57,47 +63,31 @@ export class NfTrials extends LitElement {
       this.note = 'The scene has no checks to try: add one (Verify) first.';
       return;
     }
-    this.worker ??= this.workerStart();
-    this.job += 1;
+    if (this.channel.busy) this.channel.cancel();
     this.source = scene;
     this.phase = 'running';
     this.done = 0;
     this.total = this.count;
     this.checks = [];
     this.note = '';
-    const req: TrialsRequest = { kind: 'trials', job: this.job, doc: scene.doc, count: this.count, seed: this.seed };
-    this.worker.postMessage(req);
+    this.channel.send({ kind: 'trials', doc: scene.doc, count: this.count, seed: this.seed });
   }
 
   public cancel(): void {
     if (this.phase !== 'running') return;
-    this.worker?.terminate();
-    this.worker = null;
-    this.job += 1;
+    this.channel.cancel();
     this.phase = 'cancelled';
     this.note = `Cancelled after ${this.done} of ${this.total} instances; the counts below are for those.`;
   }
 
-  private workerStart(): Worker {
-    const w = new Worker(new URL('./trials-worker.ts', import.meta.url), { type: 'module' });
-    w.onmessage = (e: MessageEvent<TrialsReply>) => this.reply(e.data);
-    w.onerror = (e) => {
-      this.phase = 'failed';
-      this.note = `The trials worker failed: ${e.message}`;
-      this.worker = null;
-    };
-    return w;
-  }
-
-  private reply(r: TrialsReply): void {
-    if (r.job !== this.job) return; // a cancelled job's late message
+  private reply(r: JobReply): void {
     if (r.kind === 'progress') {
       this.done = r.done;
       this.total = r.total;
-      this.checks = r.checks;
-    } else if (r.kind === 'done') {
+      this.checks = r.checks ?? this.checks;
+    } else if (r.kind === 'trials') {
       this.finish(r.report);
-    } else {
+    } else if (r.kind === 'error') {
       this.phase = 'failed';
       this.note = `${r.message}${r.where ? ` (at ${r.where})` : ''}`;
     }

@@ -139,17 +139,28 @@ describe('trials on a cubic whose points in the scene are not rational', () => {
   });
 });
 
-describe('the trials job of the page worker', () => {
-  it('posts progress with tallies, then the report, all as plain data', async () => {
-    const { trialsJobRun } = await import('../../../src/ui/scene-trials/trials-job.ts');
+describe('the trials job of the job worker', () => {
+  it('posts progress with tallies, then the report, all as plain data; a cancelled run keeps the last tallies', async () => {
+    const { jobRun } = await import('../../../src/worker/job-run.ts');
     const replies: unknown[] = [];
-    trialsJobRun({ kind: 'trials', job: 3, doc: falseClaim(), count: 4, seed: 2 }, (r) => replies.push(structuredClone(r)));
-    expect(replies.map((r) => (r as { kind: string }).kind)).toEqual(['progress', 'progress', 'progress', 'progress', 'done']);
-    const last = replies[3] as { done: number; checks: { held: number; failed: number }[] };
-    expect(last.done).toBe(4);
+    jobRun({ kind: 'trials', job: 3, doc: JSON.parse(JSON.stringify(falseClaim())), count: 4, seed: 2 }, (r) => replies.push(structuredClone(r)));
+    expect(replies.map((r) => (r as { kind: string }).kind)).toEqual(['progress', 'progress', 'progress', 'progress', 'trials']);
+    const last = replies[3] as { job: number; done: number; total: number; checks: { held: number; failed: number }[] };
+    expect([last.job, last.done, last.total]).toEqual([3, 4, 4]);
     expect(last.checks[0].held + last.checks[0].failed).toBe(4);
-    const done = replies[4] as { job: number; report: { completed: number } };
+    const done = replies[4] as { job: number; report: { completed: number; checks: unknown[] } };
     expect(done.job).toBe(3);
     expect(done.report.completed).toBe(4);
+    expect(done.report.checks).toEqual(last.checks); // the tallies of the last step are the report's
+    // The same run as the page's thread would make it (same seed, same instances).
+    expect(done.report).toEqual(structuredClone(constructionTrials(falseClaim(), { count: 4, seed: 2 })));
+  });
+  it('refuses a construction that is not one, in words', async () => {
+    const { jobRun } = await import('../../../src/worker/job-run.ts');
+    const replies: { kind: string; message?: string }[] = [];
+    jobRun({ kind: 'trials', job: 1, doc: { objects: 7 } as never, count: 2, seed: 1 }, (r) => replies.push(r));
+    expect(replies).toHaveLength(1);
+    expect(replies[0].kind).toBe('error');
+    expect(replies[0].message).toMatch(/\w/);
   });
 });
