@@ -70,11 +70,11 @@ export function ninthPointFloat(points: readonly F3[]): F3 | null {
 }
 
 /**
- * The member of the float pencil that continues `was` (the member's last coefficients): the one with the
- * same ratio of coefficients at the two free monomials. The exact member s·B1 + t·B2 has there the ratio
- * s·d1 : t·d2, with d1, d2 the scales that made B1, B2 primitive; keeping the ratio keeps those scales as
- * they were at the last exact evaluation, so the curve moves continuously (the exact scales jump with the
- * arithmetic of the points and are taken up again after the drop). Without `was`, s·K1 + t·K2.
+ * The member of the float pencil that continues `was` (the member's last coefficients): the orthogonal
+ * projection of `was` onto the span of K1, K2, i.e. the member nearest the last one. Why not s·K1 + t·K2:
+ * the exact member is s·B1 + t·B2 with B1, B2 made primitive, whose scales jump with the arithmetic of the
+ * points; the member nearest the last one moves continuously, starts at the exact member, and the exact
+ * scales are taken up again after the drop. Without `was`, s·K1 + t·K2.
  */
 export function pencilMemberFloat(points: readonly F3[], s: number, t: number, was?: readonly number[]): FloatForm | null {
   const pencil = pencilThroughPointsFloat(points);
@@ -82,13 +82,19 @@ export function pencilMemberFloat(points: readonly F3[], s: number, t: number, w
   const [k1, k2] = pencil.basis;
   let a = s;
   let b = t;
-  if (was && was.length === k1.coeffs.length) {
-    const wa = was[pencil.free[0]];
-    const wb = was[pencil.free[1]];
-    if (Number.isFinite(wa) && Number.isFinite(wb) && (wa !== 0 || wb !== 0)) {
-      const w = Math.max(Math.abs(wa), Math.abs(wb));
-      a = wa / w;
-      b = wb / w;
+  if (was && was.length === k1.coeffs.length && was.every(Number.isFinite)) {
+    const w = Math.max(...was.map(Math.abs));
+    const dot = (x: readonly number[], y: readonly number[]): number => x.reduce((acc, c, i) => acc + c * y[i], 0);
+    const u = was.map((c) => c / (w || 1));
+    const g11 = dot(k1.coeffs, k1.coeffs);
+    const g12 = dot(k1.coeffs, k2.coeffs);
+    const g22 = dot(k2.coeffs, k2.coeffs);
+    const r1 = dot(k1.coeffs, u);
+    const r2 = dot(k2.coeffs, u);
+    const det = g11 * g22 - g12 * g12;
+    if (w > 0 && det > 0) {
+      a = (g22 * r1 - g12 * r2) / det;
+      b = (g11 * r2 - g12 * r1) / det;
     }
   }
   const coeffs = k1.coeffs.map((c, i) => a * c + b * k2.coeffs[i]);

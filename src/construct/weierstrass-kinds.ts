@@ -13,7 +13,7 @@ import { pointToString } from '../plane/parse-point.ts';
 import { triple, type Point } from '../plane/point.ts';
 import type { ModelPoint } from '../cubic/curve-model.ts';
 import { weierstrassMap, weierstrassModel, type WeierstrassModel } from '../cubic/weierstrass.ts';
-import { f3Normalise, type F3 } from './float.ts';
+import { f3Cross, f3FromBig, f3IsZero, f3Normalise, f3Sine, formGradientFloat, formToFloat, lineCurveMeetFloat, type F3 } from './float.ts';
 
 const MODELS = new WeakMap<Form, Map<string, WeierstrassModel>>();
 
@@ -84,14 +84,48 @@ function forwardFloat(model: WeierstrassModel): readonly (readonly number[])[] {
 
 /**
  * The image of a float point near the curve, by the forward forms in doubles (degree 1 at a flex O, else
- * 2). Null near O and O' where all three forms vanish (the exact map treats those points apart).
+ * 2). The forms vanish together at O and O' = O * O, so near those points their values are mostly
+ * rounding: at O the image is (0:1:0); near O' we use −P = P * O' (the law with base O: −P = P * (O * O),
+ * MATH.md) and take the negative of the image of P * O' on the model (when O' is a flex P * O' is near
+ * O' too and we give up: null)
+ * (−(x, y) = (x, −y − a1·x − a3), Silverman, AEC III.2). Null when no image can be told.
  */
 export function weierstrassImageFloat(model: WeierstrassModel, p: F3): F3 | null {
+  const o = f3FromBig(model.base);
+  if (f3Sine(p, o) < NEAR) return [0, 1, 0];
+  const second = model.lines.second;
+  if (second && f3Sine(p, f3FromBig(second)) < FAR_FROM_SECOND) {
+    // P * O' from the line's three meets, the one farthest from O' (the chord formula cancels badly for
+    // P next to O'); at O' itself the line is the tangent there.
+    const s2 = f3FromBig(second);
+    const cf = formToFloat(model.curve);
+    const line = f3Sine(p, s2) < TANGENT_SWITCH ? f3Normalise(formGradientFloat(cf, s2)) : f3Cross(p, s2);
+    let q: F3 | null = null;
+    for (const m of lineCurveMeetFloat(cf, line)) if (!q || f3Sine(m, s2) > f3Sine(q, s2)) q = m;
+    if (!q || f3Sine(q, s2) < FAR_FROM_SECOND) return null;
+    const w = formsAt(model, q);
+    if (!w) return null;
+    const [a1, , a3] = model.a.map(Number);
+    return f3Normalise([w[0], -w[1] - a1 * w[0] - a3 * w[2], w[2]]);
+  }
+  return formsAt(model, p);
+}
+
+/** Below this sine a float point is taken to be O itself. */
+const NEAR = 1e-12;
+/** Closer than this to O' the line P O' is taken to be the tangent there: the cross product of two points
+ * a distance h apart is off by about 1e-16/h, the tangent by about h; the two meet near 1e-8. */
+const TANGENT_SWITCH = 1e-8;
+/** Closer than this to O' the forms' values are too small to trust (they vanish there to first order). */
+const FAR_FROM_SECOND = 1e-4;
+
+// The three forward forms at p, as a unit triple; null when they all vanish.
+function formsAt(model: WeierstrassModel, p: F3): F3 | null {
   const forms = forwardFloat(model);
   const deg = model.forward[0].degree;
   const v = forms.map((c) => (deg === 1 ? c[0] * p[0] + c[1] * p[1] + c[2] * p[2] : quadraticAt(c, p)));
   const q = f3Normalise(v);
-  return q[0] === 0 && q[1] === 0 && q[2] === 0 ? null : q;
+  return f3IsZero(q) ? null : q;
 }
 
 // Monomial order of form.ts for degree 2: X², XY, XZ, Y², YZ, Z².
