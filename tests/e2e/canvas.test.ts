@@ -274,4 +274,85 @@ describe('canvas app (e2e)', () => {
       await shot(page, '12-wide');
     }, 1920, 1080);
   }, 60_000);
+
+  // The side bar as a visitor first sees it (the default demo scene open, its Scene panel at the top), at
+  // a laptop and a desktop size: no control or text sticks out of the side bar or is cut off, and every
+  // control can be named. The screenshots are looked at by hand as well.
+  for (const [w, hgt] of [[1280, 800], [1920, 1080]] as const) {
+    it(`shows the side bar at ${w}x${hgt} with nothing overflowing, clipped or unlabelled`, async () => {
+      const context = await h.browser.newContext({ viewport: { width: w, height: hgt } });
+      const page = await context.newPage();
+      const errors: string[] = [];
+      page.on('pageerror', (e) => errors.push(e.message));
+      try {
+        await page.goto(h.url, { timeout: 60_000 });
+        await page.waitForFunction(() => (window as any).__ninefold?.doc()?.objects?.length > 0, null, { timeout: 60_000 });
+        await page.locator('nf-scene-file').waitFor();
+        await settle(page);
+        await shot(page, `14-sidebar-${w}x${hgt}`);
+        const sideBarFaults = () => page.evaluate(() => {
+          const app = document.querySelector('nf-app')!;
+          const aside = app.shadowRoot!.querySelector('aside')!;
+          const box = aside.getBoundingClientRect();
+          const out: string[] = [];
+          const walk = (root: ParentNode) => {
+            for (const el of root.querySelectorAll('*')) {
+              const e = el as HTMLElement;
+              if (e.shadowRoot) walk(e.shadowRoot);
+              const r = e.getBoundingClientRect();
+              if (r.width === 0 || r.height === 0 || getComputedStyle(e).visibility === 'hidden') continue;
+              const name = `${e.localName}${e.className ? '.' + String(e.className).replace(/\s+/g, '.') : ''} "${(e.textContent ?? '').trim().slice(0, 30)}"`;
+              if (r.left < box.left - 0.5 || r.right > box.right - aside.offsetWidth + aside.clientWidth + 0.5) out.push(`outside the side bar: ${name} (${Math.round(r.left)}..${Math.round(r.right)} of ${Math.round(box.left)}..${Math.round(box.right)})`);
+              const control = ['input', 'select', 'button', 'textarea'].includes(e.localName);
+              if (control && e.scrollWidth > e.clientWidth + 1 && e.localName !== 'textarea' && e.localName !== 'input') out.push(`text cut off in ${name}`);
+              if (control && (e as HTMLInputElement).type !== 'file') {
+                const labelled = e.getAttribute('aria-label') || (e.textContent ?? '').trim() || e.closest('label') || e.getAttribute('title') || ((e as HTMLInputElement).id && root.querySelector(`label[for="${(e as HTMLInputElement).id}"]`));
+                if (!labelled) out.push(`no name for ${name}`);
+              }
+            }
+          };
+          walk(aside);
+          if (aside.scrollWidth > aside.clientWidth + 1) out.push(`the side bar scrolls sideways (${aside.scrollWidth} > ${aside.clientWidth})`);
+          return out;
+        });
+        expect(await sideBarFaults(), 'as it opens').toEqual([]);
+        // Every folding section open (figure export, trials, notes, blow-up, ...): still nothing sticks out.
+        await page.evaluate(() => {
+          const open = (root: ParentNode) => {
+            for (const el of root.querySelectorAll('*')) {
+              if (el.localName === 'details') (el as HTMLDetailsElement).open = true;
+              if ((el as HTMLElement).shadowRoot) open((el as HTMLElement).shadowRoot!);
+            }
+          };
+          open(document.querySelector('nf-app')!.shadowRoot!);
+        });
+        await settle(page);
+        await shot(page, `14-sidebar-${w}x${hgt}-open`);
+        const scroll = async (to: number) => {
+          await page.evaluate((t) => {
+            const aside = document.querySelector('nf-app')!.shadowRoot!.querySelector('aside')!;
+            aside.scrollTop = t * aside.scrollHeight;
+          }, to);
+          await settle(page);
+        };
+        for (const at of [0.3, 0.6]) {
+          await scroll(at);
+          await shot(page, `14-sidebar-${w}x${hgt}-open-${Math.round(at * 10)}`);
+        }
+        await scroll(1);
+        await shot(page, `14-sidebar-${w}x${hgt}-open-end`);
+        expect(await sideBarFaults(), 'with every section open').toEqual([]);
+        expect(errors).toEqual([]);
+      } finally {
+        await context.close();
+      }
+    }, 90_000);
+  }
+  it('a reset page forgets the demo scene\'s title and notes', async () => {
+    await withPage(async (page) => {
+      expect(await page.locator('nf-scene-file input.title').inputValue()).toBe('Untitled scene');
+      await page.locator('nf-scene-file details.notes summary').click();
+      expect(await page.locator('nf-scene-file textarea').inputValue()).toBe('');
+    });
+  }, 60_000);
 });

@@ -17,7 +17,7 @@ export class NfObjects extends LitElement {
     css`
       :host { display: block; }
       ul { list-style: none; margin: 0; padding: 0; max-height: 220px; overflow-y: auto; border: 1px solid var(--rule); border-radius: 4px; background: var(--paper); }
-      li { display: grid; grid-template-columns: 84px 84px minmax(0, 1fr); gap: 6px; padding: 3px 6px; cursor: pointer; border-bottom: 1px solid #ece6d8; align-items: baseline; }
+      li { display: grid; grid-template-columns: 84px 66px minmax(0, 1fr); gap: 6px; padding: 3px 6px; cursor: pointer; border-bottom: 1px solid #ece6d8; align-items: baseline; }
       li:last-child { border-bottom: none; }
       li[aria-selected='true'] { background: #f9e6b0; }
       li.helper { color: var(--ink-soft); }
@@ -54,7 +54,7 @@ export class NfObjects extends LitElement {
                 data-id=${o.id}
                 data-label=${o.label}
                 aria-selected=${sel.has(o.id) ? 'true' : 'false'}
-                title=${v?.type === 'failure' ? v.message : KINDS[o.construction.kind].words}
+                title=${`${o.label}: ${v?.type === 'failure' ? v.message : KINDS[o.construction.kind].words}`}
                 @click=${(e: MouseEvent) => this.pick(o.id, e.shiftKey)}
                 @keydown=${(e: KeyboardEvent) => (e.key === 'Enter' || e.key === ' ') && (e.preventDefault(), this.pick(o.id, e.shiftKey))}
               >

@@ -25,8 +25,12 @@ export class NfSceneFile extends LitElement {
     theme,
     css`
       :host { display: block; }
-      .bar { display: flex; flex-wrap: wrap; gap: 6px; align-items: center; }
-      .title { flex: 1 1 12em; min-width: 8em; }
+      .bar { display: flex; flex-wrap: wrap; gap: 6px; align-items: center; margin-top: 6px; }
+      .named { display: flex; gap: 6px; align-items: center; }
+      .named span { color: var(--ink-soft); }
+      .title { flex: 1 1 auto; min-width: 0; }
+      /* The demo list is as wide as its longest title unless told otherwise: keep it inside the side bar. */
+      select { flex: 1 1 100%; min-width: 0; max-width: 100%; text-overflow: ellipsis; }
       .refusal { margin-top: 6px; padding: 6px 8px; border-left: 4px solid var(--fails); background: var(--panel); white-space: pre-wrap; overflow-wrap: anywhere; }
       .refusal b { color: var(--fails); }
       .drop { position: fixed; inset: 0; display: grid; place-items: center; background: rgba(251, 248, 241, 0.86); border: 4px dashed var(--accent); font-size: 18px; z-index: 50; pointer-events: none; }
@@ -147,8 +151,10 @@ export class NfSceneFile extends LitElement {
   protected override render() {
     const r = this.refusal;
     return html`
+      <label class="named"><span>Title</span>
+        <input class="title" aria-label="Scene title" title=${this.meta.value.title} .value=${this.meta.value.title} @change=${this.onTitle} maxlength="400" />
+      </label>
       <div class="bar">
-        <input class="title" aria-label="Scene title" .value=${this.meta.value.title} @change=${this.onTitle} maxlength="400" />
         <button @click=${() => this.save()} title="Download the scene as a file">Save scene</button>
         <button @click=${() => (this.renderRoot.querySelector('input[type=file]') as HTMLInputElement).click()} title="Open a scene file (or drop one on the page)">Open scene…</button>
         <input type="file" accept=".json,application/json" @change=${this.onPick} aria-label="Scene file to open" />
