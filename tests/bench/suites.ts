@@ -9,5 +9,6 @@ import { traceBench } from './trace.bench.ts';
 import { scenesBench } from './scenes.bench.ts';
 import { groupBench } from './group.bench.ts';
 import { dragBench } from './drag.bench.ts';
+import { followBench } from './follow.bench.ts';
 
-export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, realRootsBench, nineBench, pointsBench, curveBench, traceBench, scenesBench, groupBench, dragBench];
+export const SUITES: BenchSuite[] = [formsBench, rootsBench, gcdBench, realRootsBench, nineBench, pointsBench, curveBench, traceBench, scenesBench, groupBench, followBench, dragBench];
