@@ -41,6 +41,14 @@ export const PAPER = '#fbf8f1';
 export const LABEL_INK = '#1e1c18';
 const LABEL_PX = 14;
 
+/** Style keys of point marks start so: their shape (disc, ring, dashed ring) says the status and must be kept. */
+export const POINT_MARK_PREFIX = 'point:';
+
+/** Is this style key a point's status mark? (Greyscale printing must not give a ring a dash.) */
+export function styleIsPointMark(key: string): boolean {
+  return key.startsWith(POINT_MARK_PREFIX);
+}
+
 /** Radius in CSS pixels of a point's mark (helpers smaller), shared with the canvas's highlight rings. */
 export function pointMarkRadius(helper: boolean): number {
   return helper ? 3 : 4.5;
@@ -99,7 +107,7 @@ export function constructionDisplayList(doc: ConstructionDoc, values: ValueMap, 
       // A mark whose disc reaches into the view is drawn (the sink and the figure's clip cut it at the edge).
       const reach = (r + 2) * px;
       if (!at || at.x < view.xmin - reach || at.x > view.xmax + reach || at.y < view.ymin - reach || at.y > view.ymax + reach) continue;
-      const key = `point:${v.status}:${o.style.colour}:${r}`;
+      const key = `${POINT_MARK_PREFIX}${v.status}:${o.style.colour}:${r}`;
       if (v.status === 'exact') {
         styles[key] = style(PAPER, 1.25, o.style.colour, r);
         points.push({ kind: 'dot', x: at.x, y: at.y, role: 'point', style: key, owner: o.id });

@@ -4,6 +4,7 @@
 // Canonical form: page coordinates are in points (1/72 in), origin at the top left, v growing down (SVG);
 // TikZ flips v itself. The view is a world rectangle xmin < xmax, ymin < ymax; a figure keeps its aspect.
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
+import { styleIsPointMark } from './display.ts';
 
 export interface FigureView {
   readonly xmin: number;
@@ -171,7 +172,8 @@ const GREY_DASHES: readonly (readonly number[])[] = [[7, 3.5], [1.5, 3], [8, 3, 
  */
 export function greyscaleDistinguish(list: DisplayList): DisplayList {
   const stroked = new Set<string>();
-  for (const it of list.items) if (it.kind === 'polyline' || it.kind === 'segment') stroked.add(it.style);
+  // Point marks are left alone: a ring given a dash would read as an approximate point.
+  for (const it of list.items) if ((it.kind === 'polyline' || it.kind === 'segment') && !styleIsPointMark(it.style)) stroked.add(it.style);
   const kept: { grey: number; dash: string; colour: string }[] = [];
   const styles: Record<string, ItemStyle> = { ...list.styles };
   let next = 0;

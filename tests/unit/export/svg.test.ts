@@ -130,4 +130,19 @@ describe('greyscale keeps strokes apart', () => {
     expect(figureToSvg({ ...base, list, options: { greyscale: true } })).toMatch(/data-owner="c2"[^>]*stroke-dasharray/);
     expect(figureToSvg({ ...base, list })).not.toMatch(/stroke-dasharray/);
   });
+  it('never dashes a point mark: an algebraic point stays a solid ring beside a curve of the same grey', async () => {
+    const { greyscaleDistinguish } = await import('../../../src/export/figure.ts');
+    const { constructionDisplayList } = await import('../../../src/export/display.ts');
+    const { constructionAdd, constructionEmpty } = await import('../../../src/construct/graph.ts');
+    const { constructionEvaluate } = await import('../../../src/construct/evaluate.ts');
+    let doc = constructionEmpty();
+    const e = constructionAdd(doc, { construction: { kind: 'curve-equation', parents: [], params: { equation: 'y^2 = x^3 - 4x + 4' } }, style: { colour: '#1f5fa8' } });
+    const p = constructionAdd(e.doc, { construction: { kind: 'point-on-curve', parents: [e.id], params: { x: '-1/2', near: '2' } }, style: { colour: '#b8321a' } });
+    doc = p.doc;
+    const list = constructionDisplayList(doc, constructionEvaluate(doc), { xmin: -4, xmax: 4, ymin: -3, ymax: 3, widthPx: 800, heightPx: 600 });
+    const ring = list.items.find((i) => i.owner === p.id && i.kind === 'polyline');
+    expect(ring && list.styles[ring.style].dash).toEqual([]); // algebraic: a solid ring
+    const out = greyscaleDistinguish(list);
+    expect(out.styles[ring!.style].dash).toEqual([]);
+  });
 });
