@@ -37,6 +37,18 @@ export function meetNearest(candidates: readonly MeetCandidate[], target: F3): n
   return best;
 }
 
+/** "near" names a meet point only when it lies within this share of the least distance between two of
+ * them: after a drop the point has moved by about a pixel, far less than that; in a new instance (theorem
+ * trials) near is usually far from all of them and the index decides, so that two meet objects of the same
+ * curves do not both take the point nearest a stale place. */
+const NEAR_SHARE = 0.25;
+
+function meetSeparation(real: readonly MeetCandidate[]): number {
+  let least = Infinity;
+  for (let i = 0; i < real.length; i++) for (let j = i + 1; j < real.length; j++) least = Math.min(least, f3Sine(unit(real[i].approx), unit(real[j].approx)));
+  return least;
+}
+
 /**
  * The index (into `real`, the exact real meet points in meet.ts order) named by a meet object, by the rule
  * of types.ts; `previous` is the object's last value. Returns -1 when params.index names no point.
@@ -44,7 +56,11 @@ export function meetNearest(candidates: readonly MeetCandidate[], target: F3): n
 export function meetPointChoose(real: readonly MeetCandidate[], params: Readonly<Record<string, string>>, previous?: ObjectValue): number {
   if (real.length === 0) return -1;
   if (previous?.type === 'point' && previous.status === 'approximate') return meetNearest(real, f3FromApprox(previous.approx));
-  if (params.near !== undefined) return meetNearest(real, f3FromBig(pointParse(params.near, 'near')));
+  if (params.near !== undefined) {
+    const near = f3FromBig(pointParse(params.near, 'near'));
+    const k = meetNearest(real, near);
+    if (real.length === 1 || f3Sine(unit(real[k].approx), near) < NEAR_SHARE * meetSeparation(real)) return k;
+  }
   const k = Number(params.index);
   if (!Number.isInteger(k) || k < 0) throw new InvalidInput(`the meet index is a whole number from 0, got "${params.index}"`, 'index');
   return k < real.length ? k : -1;

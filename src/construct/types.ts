@@ -71,7 +71,8 @@ export type ConstructionKind =
 //   1. coming out of a drag (its last value is approximate): the exact real meet point nearest that
 //      float position, so the point that was followed during the drag is the one kept after the drop;
 //   2. params.near ("X:Y:Z", integers; written by `constructionMeetsSettle` in meet-identity.ts from the
-//      point's position when a drag ends): the exact real meet point nearest it;
+//      point's position when a drag ends): the exact real meet point nearest it, provided it is within a
+//      quarter of the least distance between two of the meet points (else near names none of them);
 //   3. params.index ("k"): the k-th real meet point in the order of src/cubic/meet.ts (rational points by
 //      height, then real algebraic ones by their float coordinates). Files without "near" load as before.
 // "Nearest" is the angle between the points as unit vectors of R³ (projective: points at infinity

@@ -70,9 +70,12 @@ describe('meet identity', () => {
     const { doc, id } = setup();
     const v = pointValue(constructionEvaluate(doc).get(id.M));
     expect(v.approx.x).toBeCloseTo(plusRoot(1), 12);
-    const named = constructionUpdate(doc, id.M, { params: { index: '1', near: '-2:1:1' } });
-    // near (-2.37…) picks the other irrational point, whatever the index says
+    const named = constructionUpdate(doc, id.M, { params: { index: '1', near: '-12:-2:5' } });
+    // near (-2.4, -0.4), next to (-2.37…, -0.37…), picks that point, whatever the index says
     expect(pointValue(constructionEvaluate(named).get(id.M)).approx.x).toBeCloseTo((1 - Math.sqrt(33)) / 2, 12);
+    // a near far from every meet point (a stale place in a new instance) names none: the index decides
+    const stale = constructionUpdate(doc, id.M, { params: { index: '1', near: '-1:-1:1' } });
+    expect(pointValue(constructionEvaluate(stale).get(id.M)).approx.x).toBeCloseTo(plusRoot(1), 12);
   });
 
   it('chooses by the rule order and refuses a bad index', () => {
@@ -81,6 +84,7 @@ describe('meet identity', () => {
     expect(meetPointChoose(cands, { index: '1' })).toBe(1);
     expect(meetPointChoose(cands, { index: '7' })).toBe(-1);
     expect(meetPointChoose(cands, { index: '0', near: '0:5:1' })).toBe(1);
+    expect(meetPointChoose(cands, { index: '0', near: '1:1:1' })).toBe(0); // equidistant: names none
     const dragged = { type: 'point', status: 'approximate', approx: { x: 5, y: 0.1, finite: false } } as const;
     expect(meetPointChoose(cands, { index: '2', near: '0:5:1' }, dragged)).toBe(0);
     const exactBefore = { ...dragged, status: 'exact' } as const;
