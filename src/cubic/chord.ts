@@ -171,7 +171,7 @@ export function tangentThirdRaw(f: Form, p: readonly bigint[], name = 'P'): bigi
  * r divided by c³ when that divides every entry exactly; when it does not (the inputs carried a common
  * factor), r made primitive, so no stray factor outlives one step. The same projective point either way.
  */
-function divideCube(r: bigint[], c: bigint): bigint[] {
+export function divideCube(r: bigint[], c: bigint): bigint[] {
   if (c <= 1n) return r;
   const d = c * c * c;
   const q = r.map((x) => x / d);

@@ -10,6 +10,7 @@
 import { InvalidInput } from '../exact/errors.ts';
 import type { Form } from '../poly/form.ts';
 import { cross, triple, tripleIsZero, type Point } from '../plane/point.ts';
+import { chordPartnerMake, chordPartnerThirdRaw, type ChordPartner } from './chord-partner.ts';
 import { chordThirdRaw, cubicRequire, cubicRequireSmoothPoint, tangentThird, tangentThirdRaw } from './chord.ts';
 
 /** A cubic with a chosen base point; `oo` is O * O, the point whose chord with P gives −P. */
@@ -68,14 +69,33 @@ export function groupNegateIn(g: CubicGroup, p: Point): Point {
  */
 export function groupMultipleIn(g: CubicGroup, p: Point, n: bigint): Point {
   if (n === 0n) return g.base;
-  const q: Raw = n < 0n ? negateRaw(g, p) : p;
-  const minusQ: Raw = n < 0n ? p : negateRaw(g, p);
+  const q = n < 0n ? groupNegateIn(g, p) : p;
   const digits = (n < 0n ? -n : n).toString(2);
-  let acc = q;
+  if (digits.length === 1) return canonical(q);
+  const base = basePartner(g);
+  const minusQ = chordPartnerMake(g.curve, n < 0n ? p : groupNegateIn(g, p));
+  let acc: Raw = q;
   for (let k = 1; k < digits.length; k++) {
-    acc = starRaw(g, starRaw(g, acc, acc), digits[k] === '1' ? minusQ : g.base);
+    acc = starPartner(g, tangentThirdRaw(g.curve, acc), digits[k] === '1' ? minusQ : base);
   }
   return canonical(acc);
+}
+
+const BASE_PARTNERS = new WeakMap<CubicGroup, ChordPartner>();
+
+/** The chord with O prepared once per group (chord-partner.ts). */
+function basePartner(g: CubicGroup): ChordPartner {
+  let c = BASE_PARTNERS.get(g);
+  if (!c) {
+    c = chordPartnerMake(g.curve, g.base);
+    BASE_PARTNERS.set(g, c);
+  }
+  return c;
+}
+
+// Assumes x a smooth point of g.curve at any non-zero scale; the same triple as starRaw(g, x, c.point).
+function starPartner(g: CubicGroup, x: Raw, c: ChordPartner): Raw {
+  return sameRaw(x, c.point) ? tangentThirdRaw(g.curve, x) : chordPartnerThirdRaw(c, x);
 }
 
 /** P + Q on the smooth cubic f with base point O. */

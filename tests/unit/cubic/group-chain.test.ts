@@ -53,9 +53,9 @@ describe('groupMultipleIn chain', () => {
     const g = groupMake(f, [0n, 1n, 0n]);
     for (let n = -9; n <= 9; n++) expect(groupMultipleIn(g, t, BigInt(n)), `O = 0:1:0, n = ${n}`).toEqual(multipleByAddition(g, t, n));
     // Non-flex base point: O = (-2, 0), P = (0, 0); every point of the 2-torsion subgroup in turn.
-    const g2 = groupMake(f, [-2n, 0n, 1n]);
-    for (const p of [[0n, 0n, 1n], [-3n, 0n, 1n], [0n, 1n, 0n], [-2n, 0n, 1n]] as Point[]) {
-      for (let n = -9; n <= 9; n++) expect(groupMultipleIn(g2, p, BigInt(n)), `O = -2:0:1, P = ${p}, n = ${n}`).toEqual(multipleByAddition(g2, p, n));
+    const g2 = groupMake(f, [2n, 0n, -1n]);
+    for (const p of [[0n, 0n, 1n], [3n, 0n, -1n], [0n, 1n, 0n], [2n, 0n, -1n]] as Point[]) {
+      for (let n = -9; n <= 9; n++) expect(groupMultipleIn(g2, p, BigInt(n)), `O = 2:0:-1, P = ${p}, n = ${n}`).toEqual(multipleByAddition(g2, p, n));
     }
   });
 });

@@ -1,0 +1,73 @@
+// The chord with a fixed point S of a cubic, prepared once for many partners X (the group law's chains
+// meet the same two or three points over and over).
+//
+// Canonical form: the triple returned is exactly chordThirdRaw(f, X, S) — the same integer triple, not
+// only the same projective point — so a chain may mix the two freely.
+//
+// What is prepared: ∇F(S) (so X·∇F(S) is three products), the quadratic form q_S(X) = S·∇F(X) =
+// Σ S_i ∂_iF(X) (six products with the squares of X instead of eighteen and a dot), and a basis ℓ2, ℓ3 of
+// the integer linear forms vanishing at S. For S primitive, (ℓ1, ℓ2, ℓ3) with ℓ1·S = 1 is unimodular and
+// carries S to e1, and a unimodular M keeps contents of cross products (MS × MX = M^{-T}(S × X) up to
+// sign), so content(S × X) = content(e1 × MX) = gcd(ℓ2(X), ℓ3(X)): one gcd where content(S × X) may take two.
+import { gcd } from '../exact/gcd.ts';
+import type { Form } from '../poly/form.ts';
+import { dot, tripleIsZero, type Point } from '../plane/point.ts';
+import { Degenerate } from '../exact/errors.ts';
+import { cubicGradientAt, cubicGradientForms, divideCube } from './chord.ts';
+
+export interface ChordPartner {
+  readonly curve: Form;
+  readonly point: Point;
+  readonly gradient: readonly bigint[];
+  /** Coefficients of S·∇F(X) on X², XY, XZ, Y², YZ, Z² (form.ts order). */
+  readonly quadratic: readonly bigint[];
+  readonly l2: readonly bigint[];
+  readonly l3: readonly bigint[];
+}
+
+/** Integer x, y with x·a + y·b = gcd(a, b) >= 0. Assumes a, b not both zero. */
+function extendedGcd(a: bigint, b: bigint): [bigint, bigint, bigint] {
+  let [r0, r1, x0, x1, y0, y1] = [a, b, 1n, 0n, 0n, 1n];
+  while (r1 !== 0n) {
+    const q = r0 / r1;
+    [r0, r1] = [r1, r0 - q * r1];
+    [x0, x1] = [x1, x0 - q * x1];
+    [y0, y1] = [y1, y0 - q * y1];
+  }
+  return r0 < 0n ? [-r0, -x0, -y0] : [r0, x0, y0];
+}
+
+/**
+ * A basis ℓ2, ℓ3 of {ℓ ∈ Z³ : ℓ·S = 0} for a primitive S: with g = gcd(s0, s1) = x·s0 + y·s1,
+ * ℓ2 = (s1/g, −s0/g, 0), ℓ3 = (x·s2, y·s2, −g); ℓ2 × ℓ3 = S, so they span the whole lattice.
+ */
+function annihilatorBasis(s: Point): [bigint[], bigint[]] {
+  if (s[0] === 0n && s[1] === 0n) return [[1n, 0n, 0n], [0n, 1n, 0n]];
+  const [g, x, y] = extendedGcd(s[0], s[1]);
+  return [[s[1] / g, -s[0] / g, 0n], [x * s[2], y * s[2], -g]];
+}
+
+/** Prepares the chord with S, a primitive smooth point of the cubic f (internal tier: not checked). */
+export function chordPartnerMake(f: Form, s: Point): ChordPartner {
+  const [fx, fy, fz] = cubicGradientForms(f);
+  const quadratic = [0, 1, 2, 3, 4, 5].map((k) => s[0] * fx.coeffs[k] + s[1] * fy.coeffs[k] + s[2] * fz.coeffs[k]);
+  const [l2, l3] = annihilatorBasis(s);
+  return { curve: f, point: s, gradient: cubicGradientAt(f, s), quadratic, l2, l3 };
+}
+
+/**
+ * X * S as chordThirdRaw(f, X, S) computes it (internal tier: f a cubic, X ≠ S projectively, X any
+ * non-zero integer triple on f). Degenerate when the line XS lies inside the curve.
+ */
+export function chordPartnerThirdRaw(c: ChordPartner, x: readonly bigint[]): bigint[] {
+  const [x0, x1, x2] = x;
+  const q = c.quadratic;
+  const b = q[0] * x0 * x0 + q[1] * x0 * x1 + q[2] * x0 * x2 + q[3] * x1 * x1 + q[4] * x1 * x2 + q[5] * x2 * x2;
+  const a = dot(x, c.gradient);
+  const s = c.point;
+  const r = [a * x0 - b * s[0], a * x1 - b * s[1], a * x2 - b * s[2]];
+  if (tripleIsZero(r)) {
+    throw new Degenerate('the line through the two points lies inside the curve, so it has no third point', 'P, Q');
+  }
+  return divideCube(r, gcd(dot(c.l2, x), dot(c.l3, x)));
+}

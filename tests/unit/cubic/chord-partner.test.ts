@@ -1,0 +1,58 @@
+// The prepared chord with a fixed point gives exactly the integer triple of chordThirdRaw (not only the
+// same projective point), and its one-gcd content of S × X equals the content of the cross product
+// (the unimodular-basis argument at the head of src/cubic/chord-partner.ts). Seeded random cubics
+// through random points; the partner X also scaled by a random factor (chains pass non-primitive triples).
+import { describe, expect, it } from 'vitest';
+import { randomBigInt, seededRandom } from '../../reference/oracles.ts';
+import { randomPoint, randomSmoothCubicThrough } from './group-samples.ts';
+import { chordPartnerMake, chordPartnerThirdRaw } from '../../../src/cubic/chord-partner.ts';
+import { chordThirdRaw } from '../../../src/cubic/chord.ts';
+import { groupMake, groupMultipleIn } from '../../../src/cubic/group.ts';
+import { content } from '../../../src/exact/integer.ts';
+import { gcd } from '../../../src/exact/gcd.ts';
+import { cross, dot, tripleProportional, type Point } from '../../../src/plane/point.ts';
+
+describe('chordPartnerThirdRaw', () => {
+  it('equals chordThirdRaw(f, X, S) entry for entry, X primitive or scaled', () => {
+    for (let seed = 1; seed <= 30; seed++) {
+      const rand = seededRandom(seed);
+      const pts = [randomPoint(rand, 1), randomPoint(rand, 1), randomPoint(rand, 1)];
+      const f = randomSmoothCubicThrough(rand, pts, 1);
+      const g = groupMake(f, pts[0]);
+      const s = pts[1];
+      const c = chordPartnerMake(f, s);
+      expect(dot(c.l2, s), `seed ${seed}`).toBe(0n);
+      expect(dot(c.l3, s), `seed ${seed}`).toBe(0n);
+      const l = cross(c.l2, c.l3);
+      expect(tripleProportional(l, s) && content(l) === 1n, `seed ${seed}: ℓ2 × ℓ3 = ${l}, S = ${s}`).toBe(true);
+      for (let n = 1; n <= 12; n++) {
+        const x0 = groupMultipleIn(g, pts[2], BigInt(n));
+        if (tripleProportional(x0, s)) continue;
+        const k = randomBigInt(rand, 3) || 1n;
+        for (const x of [x0, x0.map((v) => v * k)]) {
+          const info = `seed ${seed}, n ${n}, f = ${f.coeffs.join(',')}, S = ${s}, X = ${x}`;
+          expect(chordPartnerThirdRaw(c, x), info).toEqual(chordThirdRaw(f, x, s));
+          expect(gcd(dot(c.l2, x), dot(c.l3, x)), info).toBe(content(cross(s, x)));
+        }
+      }
+    }
+  });
+
+  it('partners with zero leading entries, (0:0:1) and (0:1:0), and with a zero in the middle', () => {
+    for (const [seed, s] of [[41, [0n, 0n, 1n]], [42, [0n, 1n, 0n]], [43, [3n, 0n, -2n]]] as Array<[number, Point]>) {
+      const rand = seededRandom(seed);
+      const t: Point = s[0] < 0n ? [-s[0], -s[1], -s[2]] : s;
+      const pts = [t, randomPoint(rand, 1), randomPoint(rand, 1)];
+      const f = randomSmoothCubicThrough(rand, pts, 1);
+      const c = chordPartnerMake(f, t);
+      const g = groupMake(f, pts[1]);
+      for (let n = 1; n <= 8; n++) {
+        const x = groupMultipleIn(g, pts[2], BigInt(n));
+        if (tripleProportional(x, t)) continue;
+        const info = `seed ${seed}, n ${n}, f = ${f.coeffs.join(',')}, S = ${t}, X = ${x}`;
+        expect(chordPartnerThirdRaw(c, x), info).toEqual(chordThirdRaw(f, x, t));
+        expect(gcd(dot(c.l2, x), dot(c.l3, x)), info).toBe(content(cross(t, x)));
+      }
+    }
+  });
+});
