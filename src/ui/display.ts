@@ -1,11 +1,12 @@
 // The canvas's display list: the figure's list (src/export/display.ts, the one place that decides how
 // curves, lines, point marks, labels and styles are drawn) with the page-only layers around it. Under it:
-// the search region and the selection halos; over it: the hover and pick marks, the blow-up view's lines
-// and rings, the points found by the search. The base items are kept unchanged and in order, so the screen
-// draws exactly what a figure of the same view draws, plus highlights.
+// the search region, the selection and pick halos, the widened copies of selected or hovered curves and
+// lines; over it: the hover ring of a point, the blow-up view's lines and rings, the points found by the
+// search. The base items are kept unchanged and in order, so the screen draws exactly what a figure of
+// the same view draws, plus highlights.
 //
-// Canonical form: items = [...under, ...base.items, ...over]; every highlight item's style key starts with
-// `hl:` (so a test can tell the layers apart); base styles are kept as the figure builder made them.
+// Canonical form: items = [region, halos, widened copies, ...base.items, over]; every highlight item's
+// style key starts with `hl:` (so a test can tell the layers apart); base styles are as the builder made them.
 import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
 import { constructionDisplayList, lineClip, pointMarkRadius, ringPoints, style } from '../export/display.ts';
 import type { ConstructionDoc, ObjectId, ObjectValue, PointApprox } from '../construct/types.ts';
@@ -40,6 +41,8 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
   const base = constructionDisplayList(doc, values, { ...box, widthPx: view.width, heightPx: view.height }, { labelFirst: extras.selection });
   const styles: Record<string, ItemStyle> = { ...base.styles };
   const under: DisplayItem[] = [];
+  const halos: DisplayItem[] = [];
+  const wides: DisplayItem[] = [];
   const over: DisplayItem[] = [];
   const px = 1 / view.scale;
   const put = (key: string, s: ItemStyle): string => {
@@ -56,8 +59,9 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
   }
 
   // Highlights follow the base items of the objects they mark: a selected or picked curve or line gets a
-  // pale halo under everything and is stroked again a little wider on top; hovering widens it by a pixel;
-  // a point gets a pale disc under it (selected) or a dark ring around it (hovered).
+  // pale halo and a copy a little wider, both under the figure's items (so the marks of points on it stay
+  // on top); hovering widens it by a pixel; a point gets a pale disc under it (selected) or a dark ring
+  // around it (hovered, over everything).
   const picked = new Set(extras.picks);
   const kindOf = new Map(doc.objects.map((o) => [o.id, o]));
   for (const item of base.items) {
@@ -71,7 +75,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     if (obj?.type === 'point') {
       const at = item.kind === 'dot' ? [item.x, item.y] : item.kind === 'polyline' ? ringCentre(item.points) : null;
       if (!at) continue;
-      if (highlighted) under.push({ kind: 'dot', x: at[0], y: at[1], role: 'point', style: put('select:point', style(HALO_SELECT, 0, HALO_SELECT, 10)), owner });
+      if (highlighted) halos.push({ kind: 'dot', x: at[0], y: at[1], role: 'point', style: put('select:point', style(HALO_SELECT, 0, HALO_SELECT, 10)), owner });
       if (hovered) {
         const r = pointMarkRadius(obj.helperOf !== undefined);
         over.push({ kind: 'polyline', points: ringPoints(at[0], at[1], (r + 4) * px), closed: true, ends: null, style: put('hover:point', style(HALO_HOVER, 1.5, HALO_HOVER, 0)), owner });
@@ -81,8 +85,8 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     if (item.kind === 'dot') continue; // an isolated point of a curve: its curve's halo is enough
     const extra = (highlighted ? 1.5 : 0) + (hovered ? 1 : 0);
     const width = st.width + extra;
-    if (highlighted) under.push({ ...item, style: put(`select:${width}`, style(HALO_SELECT, width + 5, HALO_SELECT, 0)) });
-    over.push({ ...item, style: put(`wide:${item.style}:${width}`, { ...st, width }) });
+    if (highlighted) halos.push({ ...item, style: put(`select:${width}`, style(HALO_SELECT, width + 5, HALO_SELECT, 0)) });
+    wides.push({ ...item, style: put(`wide:${item.style}:${width}`, { ...st, width }) });
   }
 
   if (extras.blowup) {
@@ -106,7 +110,7 @@ export function sceneDisplay(doc: ConstructionDoc, values: ReadonlyMap<ObjectId,
     const key = put('found', style('#5d4a8a', 1, '#5d4a8a', 2.5));
     for (const p of extras.found) if (p.finite) over.push({ kind: 'dot', x: p.x, y: p.y, role: 'point', style: key });
   }
-  return { items: [...under, ...base.items, ...over], styles };
+  return { items: [...under, ...halos, ...wides, ...base.items, ...over], styles };
 }
 
 /** Centre of a ring made by ringPoints (assumes the 21-vertex closed circle: opposite vertices 0 and 10). */
