@@ -1,8 +1,9 @@
 // Float shadows of the construction kinds: used while a point is dragged (status 'approximate') and for
 // objects built from algebraic points (status 'algebraic', shown by their approximation). A kind without a
 // shadow returns null and keeps its last value (evaluate.ts); so does a shadow that cannot follow (a meet
-// point whose Newton iteration stops converging). Of the kinds with parents only 'curve-weierstrass' has none: the model of a moving
-// curve is not a float computation (its coordinates come from a kernel and a minimal model over Q).
+// point whose Newton iteration stops converging). Of the kinds with parents only 'curve-weierstrass' has
+// none: the model of a moving curve is not a float computation (it comes from a kernel and a minimal
+// model over Q).
 // Internal tier: the input passed constructionCheckShape and no parent failed.
 import { pointParse } from '../plane/parse-point.ts';
 import { evaluateCheckFloat } from './checks.ts';
