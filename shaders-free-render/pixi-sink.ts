@@ -3,9 +3,20 @@
 // because the canvas renderer scales stroke widths with a container's transform and has no dashes
 // (PLATFORM.md): dashed paths are split here. The renderer is checked at start: anything but the canvas
 // renderer is refused with a clear message (no WebGL or WebGPU path exists).
-import { Application, Container, Graphics, Text } from 'pixi.js';
+//
+// Speed (the drag of hundreds of dependents, tests/bench/drag.bench.ts): Pixi's canvas renderer strokes
+// every sub-path with its own canvas call, so the cost is the number of sub-paths, and dashes made most of
+// them. Dashed straight segments are therefore one stroke each filled with a stripe pattern laid along
+// them (sink-dash-pattern.ts); the rest is drawn in the batches of sinkPlan (one Pixi stroke or fill per
+// look, painting order kept); label Text objects are kept between frames and matched by text and look
+// (making and measuring a Text is the dear part on canvas); the grid is rebuilt only when the view changes.
+// Point marks follow the figures' rule (dotMarkParts): a disc with its rim, or a ring, dashed or not.
+// Labels of the list get a paper-coloured halo so they stay readable over curves and lines.
+import { Application, CanvasSource, Container, DOMAdapter, FillPattern, Graphics, Matrix, Text, Texture } from 'pixi.js';
 import { dashSplit } from './dash.ts';
-import type { DisplayList, ItemStyle } from './display-list.ts';
+import type { DisplayList } from './display-list.ts';
+import { sinkPlan, sinkStyleOf, type SinkBatch } from './sink-batch.ts';
+import { dashStripeMatrix, dashStripes, type DashStripes } from './sink-dash-pattern.ts';
 import { ticksIn } from './ticks.ts';
 import { viewportBounds, worldToScreen, type Viewport } from './viewport.ts';
 
@@ -16,6 +27,8 @@ export interface SinkLook {
   readonly axis: string;
   readonly label: string;
   readonly fontFamily: string;
+  /** Width in CSS pixels of the paper-coloured outline behind list labels (0 for none). */
+  readonly labelHalo?: number;
 }
 
 /** A quiet paper-like look of our own. */
@@ -26,20 +39,41 @@ export const SINK_LOOK: SinkLook = {
   axis: '#8a8577',
   label: '#6b675c',
   fontFamily: 'system-ui, sans-serif',
+  labelHalo: 3,
 };
 
 export class RendererNotCanvas extends Error {}
 
 export { dashSplit };
 
+/** One wanted label of a frame, before it is matched to a kept Text. */
+interface LabelWant {
+  text: string;
+  x: number;
+  y: number;
+  color: string;
+  size: number;
+  halo: number;
+}
+
+/** Kept Text objects beyond this many, unused in a frame, are destroyed rather than hidden. */
+const TEXT_KEEP = 400;
+
 export class PixiCanvasSink {
   readonly app: Application;
   readonly rendererName: string;
   private readonly gridLayer = new Graphics();
   private readonly curveLayer = new Graphics();
+  private readonly stripes = new StripePatterns();
   private readonly labelLayer = new Container();
-  private readonly labels: Text[] = [];
   private readonly look: SinkLook;
+  /** Kept Texts by look ("size|colour|halo"), each with the text it shows. */
+  private readonly texts = new Map<string, Text[]>();
+  private textCount = 0;
+  private readonly wants: LabelWant[] = [];
+  private wantCount = 0;
+  private gridKey = '';
+  private gridWants: LabelWant[] = [];
 
   private constructor(app: Application, look: SinkLook) {
     this.app = app;
@@ -73,16 +107,26 @@ export class PixiCanvasSink {
   resize(width: number, height: number, dpr: number): void {
     this.app.renderer.resolution = dpr;
     this.app.renderer.resize(width, height);
+    this.gridKey = '';
   }
 
   /** Draw the grid with labelled axes and the display list for the viewport, then render one frame. */
   draw(list: DisplayList, vp: Viewport, options: { grid?: boolean } = {}): void {
-    if (options.grid !== false) this.gridDraw(vp);
-    else {
+    this.wantCount = 0;
+    if (options.grid !== false) {
+      const key = `${vp.cx} ${vp.cy} ${vp.scale} ${vp.width} ${vp.height}`;
+      if (key !== this.gridKey) {
+        this.gridKey = key;
+        this.gridWants = [];
+        this.gridDraw(vp);
+      }
+      for (const w of this.gridWants) this.want(w.text, w.x, w.y, w.color, w.size, 0);
+    } else if (this.gridKey !== 'none') {
+      this.gridKey = 'none';
       this.gridLayer.clear();
-      this.labelsHide(0);
     }
     this.listDraw(list, vp);
+    this.labelsPlace();
     this.app.render();
   }
 
@@ -93,40 +137,16 @@ export class PixiCanvasSink {
   private listDraw(list: DisplayList, vp: Viewport): void {
     const g = this.curveLayer;
     g.clear();
-    const styleOf = (key: string): ItemStyle => list.styles[key] ?? list.styles.curve ?? FALLBACK_STYLE;
-    for (const item of list.items) {
-      const st = styleOf(item.style);
-      if (item.kind === 'polyline') {
-        const pts = screenPath(vp, item.points);
-        for (const piece of dashSplit(pts, st.dash)) {
-          g.moveTo(piece[0], piece[1]);
-          for (let i = 2; i < piece.length; i += 2) g.lineTo(piece[i], piece[i + 1]);
-          if (item.closed && st.dash.length === 0) g.closePath();
-        }
-        g.stroke({ width: st.width, color: st.stroke, cap: 'round', join: 'round' });
-      } else if (item.kind === 'segment') {
-        const pts = screenPath(vp, [item.x0, item.y0, item.x1, item.y1]);
-        for (const piece of dashSplit(pts, st.dash)) {
-          g.moveTo(piece[0], piece[1]);
-          for (let i = 2; i < piece.length; i += 2) g.lineTo(piece[i], piece[i + 1]);
-        }
-        g.stroke({ width: st.width, color: st.stroke, cap: 'round' });
-      } else if (item.kind === 'dot') {
-        const [sx, sy] = worldToScreen(vp, item.x, item.y);
-        g.circle(sx, sy, st.radius).fill({ color: st.fill });
-      }
-    }
-    let n = this.labelsUsedByGrid;
+    this.stripes.frameStart();
+    for (const batch of sinkPlan(list, vp)) batchDraw(g, list, batch, vp, this.stripes);
+    const halo = this.look.labelHalo ?? 0;
     for (const item of list.items) {
       if (item.kind !== 'label') continue;
-      const st = styleOf(item.style);
+      const st = sinkStyleOf(list, item);
       const [sx, sy] = worldToScreen(vp, item.x, item.y);
-      this.labelPut(n++, item.text, sx + 4, sy - st.fontSize - 2, st.stroke, st.fontSize);
+      this.want(item.text, sx + 4, sy - st.fontSize - 2, st.stroke, st.fontSize, halo);
     }
-    this.labelsHide(n);
   }
-
-  private labelsUsedByGrid = 0;
 
   private gridDraw(vp: Viewport): void {
     const g = this.gridLayer;
@@ -156,48 +176,188 @@ export class PixiCanvasSink {
     if (ax >= 0 && ax <= vp.width) g.moveTo(Math.round(ax) + 0.5, 0).lineTo(Math.round(ax) + 0.5, vp.height);
     if (ay >= 0 && ay <= vp.height) g.moveTo(0, Math.round(ay) + 0.5).lineTo(vp.width, Math.round(ay) + 0.5);
     g.stroke({ width: 1, color: this.look.axis });
-    let n = 0;
     const size = 11;
+    const put = (text: string, x: number, y: number): void => {
+      this.gridWants.push({ text, x, y, color: this.look.label, size, halo: 0 });
+    };
     for (const t of xs) {
       if (t.value === 0) continue;
       const [sx] = worldToScreen(vp, t.value, 0);
       const y = axisY > vp.height - size - 6 ? axisY - size - 4 : axisY + 3;
-      this.labelPut(n++, t.label, sx + 3, y, this.look.label, size);
+      put(t.label, sx + 3, y);
     }
     for (const t of ys) {
       if (t.value === 0) continue;
       const [, sy] = worldToScreen(vp, 0, t.value);
       const x = axisX > vp.width - 60 ? axisX - 8 * t.label.length - 4 : axisX + 4;
-      this.labelPut(n++, t.label, x, sy - size - 2, this.look.label, size);
+      put(t.label, x, sy - size - 2);
     }
-    if (ax >= 0 && ax <= vp.width && ay >= 0 && ay <= vp.height) this.labelPut(n++, '0', ax + 4, ay + 3, this.look.label, size);
-    this.labelsUsedByGrid = n;
+    if (ax >= 0 && ax <= vp.width && ay >= 0 && ay <= vp.height) put('0', ax + 4, ay + 3);
   }
 
-  private labelPut(i: number, text: string, x: number, y: number, color: string, size: number): void {
-    let t = this.labels[i];
-    if (!t) {
-      t = new Text({ text, style: { fontFamily: this.look.fontFamily, fontSize: size, fill: color } });
-      this.labels.push(t);
-      this.labelLayer.addChild(t);
+  /** Ask for a label this frame (placed by labelsPlace; the array of wants is reused between frames). */
+  private want(text: string, x: number, y: number, color: string, size: number, halo: number): void {
+    let w = this.wants[this.wantCount];
+    if (!w) {
+      w = { text, x, y, color, size, halo };
+      this.wants.push(w);
+    } else {
+      w.text = text;
+      w.x = x;
+      w.y = y;
+      w.color = color;
+      w.size = size;
+      w.halo = halo;
     }
-    if (t.text !== text) t.text = text;
-    if (t.style.fontSize !== size) t.style.fontSize = size;
-    if (t.style.fill !== color) t.style.fill = color;
-    t.visible = true;
-    t.x = Math.round(x);
-    t.y = Math.round(y);
+    this.wantCount++;
   }
 
-  private labelsHide(from: number): void {
-    for (let i = from; i < this.labels.length; i++) this.labels[i].visible = false;
+  /**
+   * Match the frame's labels to kept Texts: first a Text of the same look already showing the same text
+   * (only moved), then a free one of the same look (its text set), else a new one; the rest are hidden.
+   */
+  private labelsPlace(): void {
+    const used = new Set<Text>();
+    const unmatched: LabelWant[] = [];
+    const byLook = new Map<string, Map<string, Text[]>>();
+    for (const [look, list] of this.texts) {
+      const m = new Map<string, Text[]>();
+      for (const t of list) {
+        const same = m.get(t.text);
+        if (same) same.push(t);
+        else m.set(t.text, [t]);
+      }
+      byLook.set(look, m);
+    }
+    for (let i = 0; i < this.wantCount; i++) {
+      const w = this.wants[i];
+      const t = byLook.get(lookKey(w))?.get(w.text)?.pop();
+      if (t) {
+        used.add(t);
+        textMove(t, w);
+      } else unmatched.push(w);
+    }
+    for (const w of unmatched) {
+      const key = lookKey(w);
+      let t = this.texts.get(key)?.find((x) => !used.has(x));
+      if (t) t.text = w.text;
+      else t = this.textMake(key, w);
+      used.add(t);
+      textMove(t, w);
+    }
+    for (const [key, list] of this.texts) {
+      const keep: Text[] = [];
+      for (const t of list) {
+        if (used.has(t)) keep.push(t);
+        else if (this.textCount > TEXT_KEEP) {
+          t.destroy();
+          this.textCount--;
+        } else {
+          t.visible = false;
+          keep.push(t);
+        }
+      }
+      if (keep.length) this.texts.set(key, keep);
+      else this.texts.delete(key);
+    }
+  }
+
+  private textMake(key: string, w: LabelWant): Text {
+    const style = w.halo > 0
+      ? { fontFamily: this.look.fontFamily, fontSize: w.size, fill: w.color, stroke: { color: this.look.background, width: w.halo, join: 'round' as const } }
+      : { fontFamily: this.look.fontFamily, fontSize: w.size, fill: w.color };
+    const t = new Text({ text: w.text, style });
+    this.labelLayer.addChild(t);
+    const list = this.texts.get(key);
+    if (list) list.push(t);
+    else this.texts.set(key, [t]);
+    this.textCount++;
+    return t;
   }
 }
 
-const FALLBACK_STYLE: ItemStyle = { stroke: '#222222', width: 1.5, fill: '#222222', radius: 2.5, dash: [], fontSize: 12 };
+function lookKey(w: LabelWant): string {
+  return `${w.size}|${w.color}|${w.halo}`;
+}
+
+/** Put a kept Text at a label's place: the halo's stroke shifts the glyphs by half its width, undone here. */
+function textMove(t: Text, w: LabelWant): void {
+  t.visible = true;
+  t.x = Math.round(w.x - w.halo / 2);
+  t.y = Math.round(w.y - w.halo / 2);
+}
+
+/**
+ * One batch into the Graphics: its sub-paths, then one stroke or fill. Pixi's canvas renderer still
+ * strokes each sub-path on its own (which also keeps the browser's rasteriser on small paths: one
+ * path of hundreds of crossing lines rasterises several times slower); the batch saves Pixi's per-call
+ * work (a path copy and a style per stroke call).
+ */
+function batchDraw(g: Graphics, list: DisplayList, batch: SinkBatch, vp: Viewport, stripes: StripePatterns): void {
+  const k = 1 / vp.scale;
+  const hw = vp.width / 2;
+  const hh = vp.height / 2;
+  // Differences from the centre first: far from the origin a large offset would swallow the digits.
+  const sx = (x: number): number => hw + (x - vp.cx) * k;
+  const sy = (y: number): number => hh - (y - vp.cy) * k;
+  let drawn = false;
+  for (const m of batch.members) {
+    const item = list.items[m.item];
+    const st = sinkStyleOf(list, item);
+    if (item.kind === 'dot') {
+      if (!(st.radius > 0)) continue;
+      if (m.part === 'ring' && st.dash.length > 0) piecesDraw(g, dashSplit(circlePath(sx(item.x), sy(item.y), st.radius), st.dash));
+      else g.circle(sx(item.x), sy(item.y), st.radius);
+    } else if (item.kind === 'segment') {
+      const [x0, y0, x1, y1] = [sx(item.x0), sy(item.y0), sx(item.x1), sy(item.y1)];
+      const striped = st.dash.length > 0 ? stripes.along(batch.color, st.dash, batch.width, x0, y0, x1, y1) : null;
+      if (striped) {
+        // Its own stroke call (its pattern is laid along it); what the batch holds so far goes first.
+        if (drawn) g.stroke({ width: batch.width, color: batch.color, cap: 'round', join: 'round' });
+        drawn = false;
+        g.moveTo(x0, y0).lineTo(x1, y1).stroke({ width: batch.width, fill: striped, cap: 'round', join: 'round' });
+        continue;
+      }
+      if (st.dash.length === 0) g.moveTo(x0, y0).lineTo(x1, y1);
+      else piecesDraw(g, dashSplit([x0, y0, x1, y1], st.dash));
+    } else if (item.kind === 'polyline') {
+      const p = item.points;
+      if (p.length < 4) continue;
+      if (st.dash.length === 0) {
+        g.moveTo(sx(p[0]), sy(p[1]));
+        for (let i = 2; i + 1 < p.length; i += 2) g.lineTo(sx(p[i]), sy(p[i + 1]));
+        if (item.closed) g.closePath();
+      } else piecesDraw(g, dashSplit(screenPath(vp, p), st.dash));
+    }
+    drawn = true;
+  }
+  // A fill or stroke right after another with nothing drawn between reuses the last path in Pixi.
+  if (!drawn) return;
+  if (batch.mode === 'fill') g.fill({ color: batch.color });
+  else g.stroke({ width: batch.width, color: batch.color, cap: 'round', join: 'round' });
+}
+
+/** Assumes pieces of at least two vertices (dashSplit's output). */
+function piecesDraw(g: Graphics, pieces: readonly number[][]): void {
+  for (const piece of pieces) {
+    g.moveTo(piece[0], piece[1]);
+    for (let i = 2; i + 1 < piece.length; i += 2) g.lineTo(piece[i], piece[i + 1]);
+  }
+}
+
+/** A screen circle as a closed polyline whose chords stay within a tenth of a pixel of the circle. */
+function circlePath(cx: number, cy: number, r: number): number[] {
+  const n = Math.max(12, Math.min(256, Math.ceil(Math.PI / Math.acos(Math.max(-1, 1 - 0.1 / r)))));
+  const pts = new Array<number>(2 * n + 2);
+  for (let i = 0; i <= n; i++) {
+    const t = i === n ? 0 : (2 * Math.PI * i) / n;
+    pts[2 * i] = cx + r * Math.cos(t);
+    pts[2 * i + 1] = cy + r * Math.sin(t);
+  }
+  return pts;
+}
 
 function screenPath(vp: Viewport, pts: readonly number[]): number[] {
-  // Differences from the centre first: far from the origin a large offset would swallow the digits.
   const out = new Array<number>(pts.length);
   const k = 1 / vp.scale;
   const hw = vp.width / 2;
@@ -207,4 +367,49 @@ function screenPath(vp: Viewport, pts: readonly number[]): number[] {
     out[i + 1] = hh - (pts[i + 1] - vp.cy) * k;
   }
   return out;
+}
+
+/** Stripe textures by colour, pattern and width, kept for the sink's life, and this frame's patterns. */
+class StripePatterns {
+  /** Stripe texels per CSS pixel: fine enough that a dash end is placed to a quarter of a pixel. */
+  private static readonly TEXELS = 4;
+  private readonly textures = new Map<string, { texture: Texture; stripes: DashStripes; texels: number; used: FillPattern[]; next: number }>();
+
+  frameStart(): void {
+    for (const t of this.textures.values()) t.next = 0;
+  }
+
+  /** A pattern laying the dashes along the screen segment, or null when stripes cannot show them. */
+  along(color: string, dash: readonly number[], width: number, x0: number, y0: number, x1: number, y1: number): FillPattern | null {
+    const key = `${color}|${width}|${dash.join(',')}`;
+    let t = this.textures.get(key);
+    if (!t) {
+      const stripes = dashStripes(dash, width);
+      if (!stripes || stripes.period > 4096) return null;
+      const w = Math.max(1, Math.round(stripes.period * StripePatterns.TEXELS));
+      const canvas = DOMAdapter.get().createCanvas(w, 1);
+      const ctx = canvas.getContext('2d');
+      if (!ctx) return null;
+      ctx.fillStyle = color;
+      const k = w / stripes.period;
+      let at = 0;
+      for (let i = 0; i < stripes.runs.length; i += 2) {
+        ctx.fillRect(at * k, 0, stripes.runs[i] * k, 1);
+        at += stripes.runs[i] + stripes.runs[i + 1];
+      }
+      t = { texture: new Texture({ source: new CanvasSource({ resource: canvas, resolution: 1 }) }), stripes, texels: k, used: [], next: 0 };
+      this.textures.set(key, t);
+    }
+    const m = dashStripeMatrix(x0, y0, x1, y1, width, t.texels);
+    if (!m) return null;
+    // One pattern object per segment in a frame: the renderer reads each one's transform when it draws.
+    let p = t.used[t.next];
+    if (!p) {
+      p = new FillPattern(t.texture, 'repeat');
+      t.used.push(p);
+    }
+    t.next++;
+    p.setTransform(new Matrix(m[0], m[1], m[2], m[3], m[4], m[5]));
+    return p;
+  }
 }
