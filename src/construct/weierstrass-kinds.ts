@@ -8,6 +8,7 @@
 // y² = x³ − 27c4·x − 54c6, because it is the model the maps go to (so images lie on it exactly) and its
 // coefficients are small; it draws like any cubic. The image of the base point O is the point at
 // infinity (0:1:0), the flex that is the origin of the model's group law.
+import { lcm } from '../exact/integer.ts';
 import { formPrimitive, monomialIndex, type Form } from '../poly/form.ts';
 import { pointToString } from '../plane/parse-point.ts';
 import { triple, type Point } from '../plane/point.ts';
@@ -53,14 +54,10 @@ export function weierstrassModelForm(model: WeierstrassModel): Form {
 /** A point of the model as a primitive projective triple; 'infinity' is (0:1:0). */
 export function modelPointTriple(p: ModelPoint): Point {
   if (p === 'infinity') return triple(0n, 1n, 0n);
-  const d = (p.x.den * p.y.den) / gcdBig(p.x.den, p.y.den);
+  const d = lcm(p.x.den, p.y.den);
   return triple((p.x.num * d) / p.x.den, (p.y.num * d) / p.y.den, d);
 }
 
-function gcdBig(a: bigint, b: bigint): bigint {
-  while (b !== 0n) [a, b] = [b, a % b];
-  return a < 0n ? -a : a;
-}
 
 /** The exact image of P (a smooth point of the model's curve) on the model, as a triple. */
 export function weierstrassImage(model: WeierstrassModel, p: Point, name: string): Point {

@@ -3,7 +3,8 @@
 // changes) and no DOM beyond the events it is handed.
 import { InvalidInput, NinefoldError } from '../exact/errors.ts';
 import { rat, ratToString } from '../exact/rational.ts';
-import { constructionAdd, constructionObject, constructionUpdate } from '../construct/graph.ts';
+import { constructionAdd, constructionDependents, constructionObject, constructionUpdate } from '../construct/graph.ts';
+import { constructionMeetsSettle } from '../construct/meet-identity.ts';
 import { curvePlace } from '../construct/on-curve.ts';
 import { ratSnap } from '../construct/snap.ts';
 import { formGradientFloat } from '../construct/float.ts';
@@ -221,7 +222,10 @@ export function dropPoint(id: ObjectId, at: PointApprox): void {
       const p = v?.type === 'point' ? v.approx : at;
       params = placement(curve, p.x, p.y, view.scale);
     }
-    docCommit(constructionUpdate(doc, id, { params }));
+    // Meet points built from the dragged point remember where the drag left them, so the exact
+    // recomputation (here or in the worker, and after a reload) names the same point.
+    const moved = constructionUpdate(doc, id, { params });
+    docCommit(constructionMeetsSettle(moved, $values.get(), new Set(constructionDependents(doc, id))));
   } catch (e) {
     docRefresh();
     fail(e, 'canvas');

@@ -23,13 +23,13 @@ export interface ToolSpec {
   /** One line: what the tool does. */
   readonly help: string;
   /** Group on the tool rail. */
-  readonly group: 'hand' | 'place' | 'lines' | 'group law' | 'pencils' | 'search';
+  readonly group: 'hand' | 'place' | 'lines' | 'group law' | 'models' | 'pencils' | 'search';
 }
 
 const eight = Array.from({ length: 8 }, (_, i) => `point ${i + 1} of 8`);
 
 export const TOOLS: readonly ToolSpec[] = [
-  { id: 'move', name: 'Move', key: 'v', picks: [], pickNames: [], usesCurve: false, group: 'hand', help: 'Select objects, drag free points and points on curves; drag empty space to pan, wheel to zoom.' },
+  { id: 'move', name: 'Pick and drag', key: 'v', picks: [], pickNames: [], usesCurve: false, group: 'hand', help: 'Select objects, drag free points and points on curves; drag empty space to pan, wheel to zoom.' },
   { id: 'point', name: 'Point', key: 'p', picks: [], pickNames: [], usesCurve: false, group: 'place', help: 'Click to place a free point; it snaps to the simplest rational in the pixel.' },
   { id: 'on-curve', name: 'On curve', key: 'c', picks: [], pickNames: [], usesCurve: true, group: 'place', help: 'Click near the active curve: snaps to a rational point of small height, else an algebraic point.' },
   { id: 'line', name: 'Line', key: 'l', picks: ['point', 'point'], pickNames: ['P', 'Q'], usesCurve: false, group: 'lines', help: 'The line through two points.' },
@@ -39,6 +39,8 @@ export const TOOLS: readonly ToolSpec[] = [
   { id: 'sum', name: 'Sum P+Q', key: 's', picks: ['point', 'point', 'point'], pickNames: ['the base point O', 'P', 'Q'], usesCurve: true, group: 'group law', help: 'P + Q = O*(P*Q) on the active cubic, with the chord and the line through O drawn.' },
   { id: 'multiple', name: 'Multiple nP', key: 'n', picks: ['point', 'point'], pickNames: ['the base point O', 'P'], usesCurve: true, group: 'group law', help: 'nP with base point O, for the n typed beside the tool.' },
   { id: 'negative', name: 'Negative −P', key: 'i', picks: ['point', 'point'], pickNames: ['the base point O', 'P'], usesCurve: true, group: 'group law', help: '−P = P*(O*O), with the line drawn.' },
+  { id: 'weierstrass', name: 'Model from O', key: 'w', picks: ['point'], pickNames: ['the rational point O of the active cubic'], usesCurve: true, group: 'models', help: 'The Weierstrass model W of the active smooth cubic from a rational point O on it (its minimal model, drawn as a curve).' },
+  { id: 'model-image', name: 'Image on W', key: 'u', picks: ['curve', 'point'], pickNames: ['the Weierstrass model W', 'P'], usesCurve: false, group: 'models', help: 'The image of a point P of the cubic on its Weierstrass model W; O goes to the point at infinity.' },
   { id: 'ninth', name: 'Ninth point', key: '9', picks: Array.from({ length: 8 }, () => 'point' as const), pickNames: eight, usesCurve: false, group: 'pencils', help: 'The ninth base point of the pencil of cubics through eight points.' },
   { id: 'region', name: 'Region', key: 'r', picks: [], pickNames: [], usesCurve: false, group: 'search', help: 'Drag a rectangle on the canvas: the point search keeps to it.' },
 ];
@@ -150,6 +152,19 @@ export function toolBuild(tool: ToolSpec, picks: readonly ObjectId[], ctx: ToolC
       const m = add('point-negative', [c, o, p], {}, { label: `−${label(p)}` });
       const oo = add('point-third', [c, o, o], {}, { helperOf: m, style: HELPER_POINT, label: `${label(o)}*${label(o)}` });
       add('line-through-two', [p, oo], {}, { helperOf: m, style: HELPER_LINE });
+      break;
+    }
+    case 'weierstrass':
+      add('curve-weierstrass', [curve(), picks[0]], {}, { label: 'W' });
+      break;
+    case 'model-image': {
+      const [w, p] = picks;
+      const model = constructionObject(doc, w);
+      if (!model || model.construction.kind !== 'curve-weierstrass') {
+        throw new InvalidInput(`${label(w)} is not a Weierstrass model: make one with Model from O first`, 'tool');
+      }
+      const [c, o] = model.construction.parents;
+      add('point-weierstrass-image', [c, o, p], {}, { label: `W(${label(p)})` });
       break;
     }
     case 'ninth':

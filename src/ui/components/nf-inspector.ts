@@ -32,7 +32,7 @@ export class NfInspector extends LitElement {
     const doc = this.doc.value;
     const id = this.selection.value[0];
     const o = id ? constructionObject(doc, id) : undefined;
-    if (!o) return html`<p class="soft">Select an object (Move tool, or the list) to see it exactly.</p>`;
+    if (!o) return html`<p class="soft">Select an object (Pick and drag, or the list) to see it exactly.</p>`;
     const v = this.values.value.get(o.id);
     const text = v ? valueText(v) : null;
     const height = v ? pointHeightText(v) : null;

@@ -11,6 +11,7 @@ const GROUP_TITLES: Record<ToolSpec['group'], string> = {
   place: 'Place',
   lines: 'Lines and meets',
   'group law': 'Group law',
+  models: 'Weierstrass form',
   pencils: 'Pencils',
   search: 'Search',
 };

@@ -15,6 +15,8 @@ export type ToolId =
   | 'multiple'
   | 'negative'
   | 'ninth'
+  | 'weierstrass'
+  | 'model-image'
   | 'parameter'
   | 'region';
 
