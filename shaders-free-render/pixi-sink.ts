@@ -17,6 +17,7 @@ import { dashSplit } from './dash.ts';
 import type { DisplayList } from './display-list.ts';
 import { sinkPlan, sinkStyleOf, type SinkBatch } from './sink-batch.ts';
 import { dashStripeMatrix, dashStripes, type DashStripes } from './sink-dash-pattern.ts';
+import { labelMatch, type LabelKey } from './sink-labels.ts';
 import { ticksIn } from './ticks.ts';
 import { viewportBounds, worldToScreen, type Viewport } from './viewport.ts';
 
@@ -132,6 +133,7 @@ export class PixiCanvasSink {
 
   destroy(): void {
     this.app.destroy(true, { children: true });
+    this.stripes.destroy();
   }
 
   private listDraw(list: DisplayList, vp: Viewport): void {
@@ -212,39 +214,27 @@ export class PixiCanvasSink {
     this.wantCount++;
   }
 
-  /**
-   * Match the frame's labels to kept Texts: first a Text of the same look already showing the same text
-   * (only moved), then a free one of the same look (its text set), else a new one; the rest are hidden.
-   */
+  /** Show the frame's labels on kept Texts as labelMatch pairs them; the kept ones left over are hidden. */
   private labelsPlace(): void {
+    const kept: Text[] = [];
+    const keys: LabelKey[] = [];
+    for (const [look, list] of this.texts) for (const t of list) {
+      kept.push(t);
+      keys.push({ look, text: t.text });
+    }
+    const wants = this.wants.slice(0, this.wantCount);
+    const { use, retext } = labelMatch(keys, wants.map((w) => ({ look: lookKey(w), text: w.text })));
     const used = new Set<Text>();
-    const unmatched: LabelWant[] = [];
-    const byLook = new Map<string, Map<string, Text[]>>();
-    for (const [look, list] of this.texts) {
-      const m = new Map<string, Text[]>();
-      for (const t of list) {
-        const same = m.get(t.text);
-        if (same) same.push(t);
-        else m.set(t.text, [t]);
+    wants.forEach((w, i) => {
+      let t: Text;
+      if (use[i] < 0) t = this.textMake(lookKey(w), w);
+      else {
+        t = kept[use[i]];
+        if (retext[i]) t.text = w.text;
       }
-      byLook.set(look, m);
-    }
-    for (let i = 0; i < this.wantCount; i++) {
-      const w = this.wants[i];
-      const t = byLook.get(lookKey(w))?.get(w.text)?.pop();
-      if (t) {
-        used.add(t);
-        textMove(t, w);
-      } else unmatched.push(w);
-    }
-    for (const w of unmatched) {
-      const key = lookKey(w);
-      let t = this.texts.get(key)?.find((x) => !used.has(x));
-      if (t) t.text = w.text;
-      else t = this.textMake(key, w);
       used.add(t);
       textMove(t, w);
-    }
+    });
     for (const [key, list] of this.texts) {
       const keep: Text[] = [];
       for (const t of list) {
@@ -377,6 +367,11 @@ class StripePatterns {
 
   frameStart(): void {
     for (const t of this.textures.values()) t.next = 0;
+  }
+
+  destroy(): void {
+    for (const t of this.textures.values()) t.texture.destroy(true);
+    this.textures.clear();
   }
 
   /** A pattern laying the dashes along the screen segment, or null when stripes cannot show them. */
