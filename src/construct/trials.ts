@@ -17,6 +17,7 @@
 //                    only as the evaluator can on algebraic data (often 'undecided'), and the report says so.
 // An instance where some object cannot be built (two random points fell together) is drawn again, up to
 // a limit; checks of an instance that stays degenerate are counted as `degenerate`, never as held.
+import { seededUniform } from '../exact/random.ts';
 import { Degenerate, NinefoldError } from '../exact/errors.ts';
 import { bitLength } from '../exact/integer.ts';
 import { rat, ratAdd, ratParse, ratToString } from '../exact/rational.ts';
@@ -311,14 +312,3 @@ function randomParameter(rand: () => number, height: number): string {
   }
 }
 
-/** mulberry32: small, seeded, uniform on [0, 1). Trials need repeatable draws, not cryptographic ones. */
-export function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}

@@ -1,5 +1,6 @@
 // Live outside references for tests/reference: PARI/GP (Debian pari-gp) and Singular (Debian singular),
 // run through their command lines. A missing system is a loud failure, never a skip.
+import { seededUniform } from '../../src/exact/random.ts';
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -44,17 +45,8 @@ export function gpVector(line: string): string[] {
   return body === '' ? [] : body.split(',').map((s) => s.trim());
 }
 
-/** A small seeded generator (mulberry32) so reference runs are reproducible; print the seed on failure. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** A small seeded generator (src/exact/random.ts) so reference runs are reproducible; print the seed on failure. */
+export const seededRandom = seededUniform;
 
 /** A random integer with up to `digits` decimal digits, either sign, from a seeded generator. */
 export function randomBigInt(rand: () => number, digits: number): bigint {

@@ -8,7 +8,7 @@ import { constructionEvaluate } from '../../../src/construct/evaluate.ts';
 import { curveCurveMeetFollow } from '../../../src/construct/float-meet.ts';
 import { constructionMeetsSettle } from '../../../src/construct/meet-identity.ts';
 import { f3Normalise, f3Sine, type F3 } from '../../../src/construct/float.ts';
-import { seededUniform } from '../../../src/construct/trials.ts';
+import { seededUniform } from '../../../src/exact/random.ts';
 import { curveCurveMeet } from '../../../src/cubic/meet.ts';
 import { conicThroughFive } from '../../../src/plane/conic.ts';
 import { formParse } from '../../../src/poly/parse.ts';

@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { constructionEvaluate } from '../../../src/construct/evaluate.ts';
 import { f3FromBig, f3Normalise, f3Sine, floatFormEval, type F3 } from '../../../src/construct/float.ts';
 import { ninthPointFloat, pencilMemberFloat, pencilThroughPointsFloat } from '../../../src/construct/float-pencil.ts';
-import { seededUniform } from '../../../src/construct/trials.ts';
+import { seededUniform } from '../../../src/exact/random.ts';
 import { ninthPoint } from '../../../src/cubic/nine.ts';
 import { curvesThroughPoints } from '../../../src/plane/linear-system.ts';
 import { triple, type Point } from '../../../src/plane/point.ts';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { lineClip, constructionDisplayList } from '../../../src/export/display.ts';
 import { constructionEvaluate } from '../../../src/construct/evaluate.ts';
 import { constructionAdd, constructionEmpty } from '../../../src/construct/graph.ts';
-import { seededUniform } from '../../../src/construct/trials.ts';
+import { seededUniform } from '../../../src/exact/random.ts';
 
 const VIEW = { xmin: -4, xmax: 4, ymin: -3, ymax: 3, widthPx: 800, heightPx: 600 };
 
