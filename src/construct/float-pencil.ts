@@ -6,7 +6,7 @@
 // monomial and 0 at the second, K2 the other way round — the shape of matKernel's basis before it is made
 // primitive (src/exact/linalg.ts), so K1, K2 are proportional to the exact basis forms B1, B2.
 import { monomials } from '../poly/form.ts';
-import { cubicThirdFloat, f3IsZero, f3Sine, FLOAT_ZERO, type F3, type FloatForm } from './float.ts';
+import { cubicThirdFloat, f3IsZero, f3Sine, FLOAT_ZERO, monomialEchelonFloat, type F3, type FloatForm } from './float.ts';
 
 export interface FloatPencil {
   readonly basis: readonly [FloatForm, FloatForm];
@@ -18,22 +18,7 @@ export interface FloatPencil {
 export function pencilThroughPointsFloat(points: readonly F3[]): FloatPencil | null {
   const m = monomials(3);
   const n = m.length;
-  const rows = points.map((p) => m.map((e) => p[0] ** e[0] * p[1] ** e[1] * p[2] ** e[2]));
-  const pivots: number[] = [];
-  let r = 0;
-  for (let c = 0; c < n && r < rows.length; c++) {
-    let best = r;
-    for (let i = r + 1; i < rows.length; i++) if (Math.abs(rows[i][c]) > Math.abs(rows[best][c])) best = i;
-    if (Math.abs(rows[best][c]) < 1e-12) continue;
-    [rows[r], rows[best]] = [rows[best], rows[r]];
-    for (let i = 0; i < rows.length; i++) {
-      if (i === r) continue;
-      const k = rows[i][c] / rows[r][c];
-      if (k !== 0) for (let j = c; j < n; j++) rows[i][j] -= k * rows[r][j];
-    }
-    pivots.push(c);
-    r++;
-  }
+  const { rows, pivots } = monomialEchelonFloat(3, points);
   if (points.length !== 8 || pivots.length !== 8) return null;
   const free = m.map((_, c) => c).filter((c) => !pivots.includes(c));
   const kernel = free.map((f) => {

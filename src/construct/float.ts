@@ -266,9 +266,12 @@ export function curveProjectFloat(f: FloatForm, x: number, y: number): { x: numb
   return ok ? { x, y } : null;
 }
 
-/** The curve of degree d through n = (d+1)(d+2)/2 − 1 points in doubles: the kernel vector of the n × (n+1)
- * monomial matrix by Gaussian elimination with partial pivoting. Null when the points are (nearly) special. */
-export function curveThroughPointsFloat(d: number, points: readonly F3[]): FloatForm | null {
+/**
+ * The monomial matrix of degree d at float points, reduced to row echelon form by Gaussian elimination with
+ * partial pivoting (each pivot row made the only non-zero entry of its column); `pivots[i]` is the column of
+ * row i's pivot. Entries below 1e-12 count as zero: drawing only, never a decision.
+ */
+export function monomialEchelonFloat(d: number, points: readonly F3[]): { rows: number[][]; pivots: number[] } {
   const m = monomials(d);
   const rows = points.map((p) => m.map((e) => p[0] ** e[0] * p[1] ** e[1] * p[2] ** e[2]));
   const n = m.length;
@@ -287,6 +290,15 @@ export function curveThroughPointsFloat(d: number, points: readonly F3[]): Float
     pivots.push(c);
     r++;
   }
+  return { rows, pivots };
+}
+
+/** The curve of degree d through n = (d+1)(d+2)/2 − 1 points in doubles: the kernel vector of the n × (n+1)
+ * monomial matrix by Gaussian elimination with partial pivoting. Null when the points are (nearly) special. */
+export function curveThroughPointsFloat(d: number, points: readonly F3[]): FloatForm | null {
+  const m = monomials(d);
+  const n = m.length;
+  const { rows, pivots } = monomialEchelonFloat(d, points);
   if (pivots.length !== n - 1) return null;
   const free = m.findIndex((_, c) => !pivots.includes(c));
   const v = new Array<number>(n).fill(0);
