@@ -1,19 +1,26 @@
 // The integer gcd kernel. Everything exact calls `gcd` from here and nowhere else, so the kernel can be
-// swapped by measurement (tests/bench/gcd.bench.ts prints Euclid, this kernel and PARI side by side)
-// without touching callers.
+// swapped by measurement (tests/bench/roots.bench.ts, suite "gcd kernel", prints Euclid, the kernels and
+// PARI side by side) without touching callers.
 //
 // Canonical form: gcd(a, b) >= 0, gcd(0, 0) = 0.
 //
 // Kernel, chosen by measurement on this machine (Node 20, BigInt): below 2^53 a Euclid loop on doubles;
 // above, Lehmer's algorithm (Knuth, TAOCP vol. 2, §4.5.2, Algorithm L) on the leading 53 bits, which
 // replaces ~15 big-number divisions by one 2×2 cofactor update, with Euclid's division step when the
-// quotient is too large to simulate. Synchronous, so the exact core stays synchronous.
+// quotient is too large to simulate. Above GMP_FROM, GMP's mpz_gcd through WebAssembly where it loads
+// synchronously (Node: src/exact/gcd-gmp.ts), about twice as fast as the Lehmer loop here including the
+// conversions; elsewhere the Lehmer loop. Synchronous either way, so the exact core stays synchronous.
+import { gcdGmpKernel } from './gcd-gmp.ts';
 
 const TWO53 = 9007199254740992; // 2^53
 const TWO53N = 9007199254740992n;
 const TWO52 = 4503599627370496;
 /** Below this size Euclid's BigInt divisions beat Lehmer's set-up (measured crossover ~ 22 digits). */
 const LEHMER_FROM = 1n << 72n;
+/** Above this size GMP (where present) beats the Lehmer loop despite the hexadecimal conversions (measured). */
+const GMP_FROM = 1n << 256n;
+
+let gmp: ((a: bigint, b: bigint) => bigint) | null | undefined;
 
 /** Euclid on doubles; exact because both arguments are integers below 2^53. */
 function gcdSmall(a: number, b: number): number {
@@ -107,7 +114,32 @@ export function gcd(a: bigint, b: bigint): bigint {
   if (b === 0n) return a;
   if (a < TWO53N) return BigInt(gcdSmall(Number(a), Number(b)));
   if (a < LEHMER_FROM) return gcdEuclidSorted(a, b);
+  if (a >= GMP_FROM && b >= LEHMER_FROM) {
+    if (gmp === undefined) gmp = gcdGmpKernel();
+    if (gmp) return gmp(a, b);
+  }
   return gcdLehmer(a, b);
+}
+
+/** The BigInt kernel alone (doubles, Euclid, Lehmer; never GMP): the fallback, tested against the GMP path. */
+export function gcdBigInt(a: bigint, b: bigint): bigint {
+  if (a < 0n) a = -a;
+  if (b < 0n) b = -b;
+  if (a < b) {
+    const t = a;
+    a = b;
+    b = t;
+  }
+  if (b === 0n) return a;
+  if (a < TWO53N) return BigInt(gcdSmall(Number(a), Number(b)));
+  if (a < LEHMER_FROM) return gcdEuclidSorted(a, b);
+  return gcdLehmer(a, b);
+}
+
+/** Which kernel answers gcds above GMP_FROM here: 'gmp' (Node) or 'lehmer' (where GMP cannot load synchronously). */
+export function gcdLargeKernel(): 'gmp' | 'lehmer' {
+  if (gmp === undefined) gmp = gcdGmpKernel();
+  return gmp ? 'gmp' : 'lehmer';
 }
 
 /** Euclid on BigInt down to 2^53, then on doubles. Assumes a >= b >= 0. */

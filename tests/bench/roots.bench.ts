@@ -7,13 +7,14 @@
 // u, v) × (a random rest of the remaining degree with 50- or 500-digit coefficients). PARI's counterpart is
 // nfroots(,p): the rational roots over Q (without multiplicities; ours also returns multiplicities).
 // "gcd kernel": plain Euclid on BigInt vs the kernel in src/exact/gcd.ts vs PARI's gcd, at 100, 1,000 and
-// 20,000 digits, on pairs with a planted common factor.
+// 20,000 digits, on pairs with a planted common factor. `kernelMs` is `gcd` as callers get it (GMP through
+// WebAssembly above 2^256 where it loads, i.e. in Node), `lehmerMs` the BigInt kernel alone (the fallback).
 import { median, type BenchFigure, type BenchSuite } from './bench.ts';
 import { gp, seededRandom } from '../reference/oracles.ts';
 import { upolyRationalRoots } from '../../src/exact/rational-roots.ts';
 import { upolyRealRootIntervals } from '../../src/exact/root-isolation.ts';
 import { algebraicRealRoots, algebraicToDecimal } from '../../src/exact/algebraic.ts';
-import { gcd, gcdEuclid } from '../../src/exact/gcd.ts';
+import { gcd, gcdBigInt, gcdEuclid, gcdLargeKernel } from '../../src/exact/gcd.ts';
 import { upolyGcd, upolyGcdSubresultant, upolyMul, upolyResultant, upolySquarefreeFactorisation, type UPoly } from '../../src/exact/upoly.ts';
 import { ratToString } from '../../src/exact/rational.ts';
 
@@ -125,12 +126,14 @@ export const gcdBench: BenchSuite = {
       const pairs = gcdPairs(777 + digits, digits, n);
       for (const [a, b] of pairs) if (gcd(a, b) !== gcdEuclid(a, b)) throw new Error('gcd kernel disagrees with Euclid');
       const euclidMs = medianMs(() => pairs.forEach(([a, b]) => gcdEuclid(a, b)), digits === 20000 ? 1 : reps, 1) / n;
+      for (const [a, b] of pairs) if (gcdBigInt(a, b) !== gcd(a, b)) throw new Error('the BigInt kernel disagrees with gcd');
       const kernelMs = medianMs(() => pairs.forEach(([a, b]) => gcd(a, b)), reps, 1) / n;
+      const lehmerMs = medianMs(() => pairs.forEach(([a, b]) => gcdBigInt(a, b)), reps, 1) / n;
       const loops = digits === 20000 ? 200 : digits === 1000 ? 5000 : 50000;
       const pariMsEach = pariMs(`v=[${pairs.map(([a, b]) => `[${a},${b}]`).join(',')}]; m=#v;`, `gcd(v[r%m+1][1], v[r%m+1][2])`, loops);
       figures.push({
         label: `gcd of two ${digits}-digit integers (ms per gcd)`,
-        values: { euclidMs, kernelMs, pariMs: pariMsEach, euclidOverKernel: euclidMs / kernelMs, kernelOverPari: kernelMs / pariMsEach },
+        values: { euclidMs, kernelMs, kernel: gcdLargeKernel(), lehmerMs, pariMs: pariMsEach, euclidOverKernel: euclidMs / kernelMs, kernelOverPari: kernelMs / pariMsEach, lehmerOverPari: lehmerMs / pariMsEach },
       });
     }
     // Polynomial gcd (modular, after the coprimality filter), square-free factorisation and resultant
