@@ -1,59 +1,20 @@
-// Browser-test helpers for the canvas app: serve the page with vite on 127.0.0.1, drive headless Debian
-// Chromium through playwright-core, save screenshots, and read the app's state through window.__ninefold.
+// Browser-test helpers for the canvas app, on the generic harness of tests/e2e/browser.ts: open the app,
+// save screenshots, and read the app's state through window.__ninefold.
 import { mkdirSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { createServer, type ViteDevServer } from 'vite';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { resolve } from 'node:path';
+import type { Page } from 'playwright-core';
+import { browserHarnessStart, E2E_ROOT, E2E_SHOTS, type BrowserHarness } from './browser.ts';
 
-export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
-export const SHOTS = resolve(ROOT, 'test-output/e2e');
+export const ROOT = E2E_ROOT;
+export const SHOTS = E2E_SHOTS;
 export const SCREENS = resolve(ROOT, 'tests/e2e/screens');
 
-export const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-];
+export type Harness = BrowserHarness;
 
-export interface Harness {
-  readonly server: ViteDevServer;
-  readonly browser: Browser;
-  readonly url: string;
-  close(): Promise<void>;
-}
-
+/** The generic harness (tests/e2e/browser.ts), with the folder of the README's images made. */
 export async function harnessStart(): Promise<Harness> {
-  mkdirSync(SHOTS, { recursive: true });
   mkdirSync(SCREENS, { recursive: true });
-  const server = await createServer({ root: ROOT, logLevel: 'error', server: { host: '127.0.0.1', port: 0, strictPort: false, hmr: false } });
-  await server.listen();
-  const addr = server.httpServer?.address();
-  const port = typeof addr === 'object' && addr ? addr.port : 5173;
-  let browser: Browser;
-  try {
-    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS, timeout: 60_000 });
-  } catch (e) {
-    await server.close();
-    throw e;
-  }
-  return {
-    server,
-    browser,
-    url: `http://127.0.0.1:${port}/`,
-    async close() {
-      try {
-        await browser.close();
-      } finally {
-        await server.close();
-      }
-    },
-  };
+  return browserHarnessStart();
 }
 
 /** A fresh page (its own storage) at the given size, with the app loaded and the canvas drawn. */

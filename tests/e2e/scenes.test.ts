@@ -6,35 +6,27 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createServer, type ViteDevServer } from 'vite';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
+import { browserHarnessStart, type BrowserHarness } from './browser.ts';
 import { sceneParse } from '../../src/scene/load.ts';
 import { sceneToText } from '../../src/scene/save.ts';
 import type { Scene } from '../../src/scene/scene.ts';
 import { constructionAdd, constructionEmpty } from '../../src/construct/graph.ts';
 import { rat } from '../../src/exact/rational.ts';
 
-const ROOT = new URL('../../', import.meta.url).pathname;
 const demo = (f: string) => readFileSync(new URL(`../../scenes/${f}`, import.meta.url), 'utf8');
-let server: ViteDevServer;
+let harness: BrowserHarness;
 let browser: Browser;
 let base = '';
 
 beforeAll(async () => {
-  server = await createServer({ root: ROOT, logLevel: 'error', server: { host: '127.0.0.1', port: 0, strictPort: false } });
-  await server.listen();
-  const addr = server.httpServer!.address() as { port: number };
-  base = `http://127.0.0.1:${addr.port}/`;
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
-    timeout: 60_000,
-  });
+  harness = await browserHarnessStart();
+  browser = harness.browser;
+  base = harness.url;
 }, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await harness?.close();
 });
 
 async function fresh(): Promise<Page> {
