@@ -89,3 +89,13 @@ export const CURVE_STYLE: ItemStyle = {
 export function displayListEmpty(): DisplayList {
   return { items: [], styles: { curve: CURVE_STYLE } };
 }
+
+/** How a dot is marked, the one rule every sink and exporter follows: a dot whose fill is "none" is a ring
+ * (dashed when its style is); a filled point dot gets an outline in its stroke colour when that differs
+ * from the fill (the paper rim of an exact point). */
+export type DotMark = { readonly ring: true } | { readonly ring: false; readonly outline: boolean };
+
+export function dotMark(style: ItemStyle, role: 'isolated' | 'point'): DotMark {
+  if (style.fill === 'none') return { ring: true };
+  return { ring: false, outline: role === 'point' && style.width > 0 && style.stroke !== style.fill };
+}

@@ -7,7 +7,7 @@
 // Canonical form: batches in painting order; every primitive of every non-label item appears in exactly
 // one batch; within a batch members keep list order. Boxes are screen CSS pixels, widened by half the
 // stroke width and one pixel of antialiasing; a box that is not finite counts as the whole plane.
-import type { DisplayItem, DisplayList, ItemStyle } from './display-list.ts';
+import { dotMark, type DisplayItem, type DisplayList, type ItemStyle } from './display-list.ts';
 import type { Viewport } from './viewport.ts';
 
 /**
@@ -33,8 +33,9 @@ export interface SinkBatch {
 /** How a dot is marked, shared with the figure exporters' rule: fill "none" is a ring; a point's disc
  * has an outline when its style gives a width and an ink other than the fill. */
 export function dotMarkParts(st: ItemStyle, role: 'isolated' | 'point'): SinkPart[] {
-  if (st.fill === 'none') return st.width > 0 ? ['ring'] : [];
-  return role === 'point' && st.width > 0 && st.stroke !== st.fill ? ['disc', 'outline'] : ['disc'];
+  const mark = dotMark(st, role);
+  if (mark.ring) return st.width > 0 ? ['ring'] : [];
+  return mark.outline ? ['disc', 'outline'] : ['disc'];
 }
 
 export const SINK_FALLBACK_STYLE: ItemStyle = { stroke: '#222222', width: 1.5, fill: '#222222', radius: 2.5, dash: [], fontSize: 12 };

@@ -3,7 +3,7 @@
 //
 // Canonical form: page coordinates are in points (1/72 in), origin at the top left, v growing down (SVG);
 // TikZ flips v itself. The view is a world rectangle xmin < xmax, ymin < ymax; a figure keeps its aspect.
-import type { DisplayItem, DisplayList, ItemStyle } from '../../shaders-free-render/display-list.ts';
+import { dotMark, type DisplayItem, type DisplayList, type DotMark, type ItemStyle } from '../../shaders-free-render/display-list.ts';
 import { styleIsPointMark } from './display.ts';
 
 export interface FigureView {
@@ -106,12 +106,10 @@ export function inkOf(colour: string, greyscale: boolean): string {
 
 /** How a dot is drawn, read from its style as the canvas reads it: fill "none" is a ring (algebraic, or
  * dashed: approximate); otherwise a filled disc, outlined when the style has a stroke width. */
-export type DotShape = { readonly ring: true } | { readonly ring: false; readonly outline: boolean };
+export type DotShape = DotMark;
 
-export function dotShape(style: ItemStyle, role: 'isolated' | 'point'): DotShape {
-  if (style.fill === 'none') return { ring: true };
-  return { ring: false, outline: role === 'point' && style.width > 0 && style.stroke !== style.fill };
-}
+/** The mark of a dot: the display list's one rule (shaders-free-render/display-list.ts). */
+export const dotShape = dotMark;
 
 /**
  * The exact value to write beside a point's mark, or undefined: a point at infinity (Z = 0) is marked at
