@@ -25,6 +25,32 @@ export function medianMs(fn: () => unknown, reps = 7, warm = 2): number {
   return median(times);
 }
 
+/**
+ * Median CPU time in ms of one call of fn (process.cpuUsage, µs resolution). PARI's gettime() is CPU time
+ * too, so a ratio to it is like for like even when other work shares the machine. Each of `reps` samples
+ * runs fn repeatedly for at least `minMs` of CPU time (0: one call per sample) after `warm` warm-up calls.
+ */
+export function medianCpuMs(fn: () => unknown, reps = 5, warm = 1, minMs = 10): number {
+  const cpu = () => {
+    const u = process.cpuUsage();
+    return (u.user + u.system) / 1000;
+  };
+  for (let i = 0; i < warm; i++) fn();
+  const samples: number[] = [];
+  for (let r = 0; r < reps; r++) {
+    const t0 = cpu();
+    let n = 0;
+    let t = t0;
+    do {
+      fn();
+      n++;
+      t = cpu();
+    } while (t - t0 < minMs);
+    samples.push((t - t0) / n);
+  }
+  return median(samples);
+}
+
 export function median(xs: readonly number[]): number {
   const s = [...xs].sort((a, b) => a - b);
   const m = s.length >> 1;

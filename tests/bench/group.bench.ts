@@ -8,23 +8,10 @@
 // answers are the cubic's points; a spot check maps a few back through our Weierstrass map and compares
 // with PARI's multiples before timing.
 import { gp, seededRandom } from '../reference/oracles.ts';
-import { median, type BenchFigure, type BenchSuite } from './bench.ts';
+import { medianCpuMs, type BenchFigure, type BenchSuite } from './bench.ts';
 
-/** Median CPU time in ms of one call of fn over `reps` samples after `warm` calls (as in roots.bench.ts). */
-function medianMs(fn: () => unknown, reps: number, warm: number): number {
-  const cpu = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
-  for (let i = 0; i < warm; i++) fn();
-  const samples: number[] = [];
-  for (let r = 0; r < reps; r++) {
-    const t0 = cpu();
-    fn();
-    samples.push(cpu() - t0);
-  }
-  return median(samples);
-}
+/** One call per sample: the group-law runs are long enough on their own. */
+const medianMs = (fn: () => unknown, reps: number, warm: number): number => medianCpuMs(fn, reps, warm, 0);
 import { pointPullBack, randomUnimodular, weierstrassCubic } from '../unit/cubic/group-samples.ts';
 import { formTransform } from '../../src/poly/transform.ts';
 import { groupAddIn, groupMake, groupMultipleIn } from '../../src/cubic/group.ts';

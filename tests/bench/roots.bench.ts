@@ -9,7 +9,7 @@
 // "gcd kernel": plain Euclid on BigInt vs the kernel in src/exact/gcd.ts vs PARI's gcd, at 100, 1,000 and
 // 20,000 digits, on pairs with a planted common factor. `kernelMs` is `gcd` as callers get it (GMP through
 // WebAssembly above 2^256 where it loads, i.e. in Node), `lehmerMs` the BigInt kernel alone (the fallback).
-import { median, type BenchFigure, type BenchSuite } from './bench.ts';
+import { median, medianCpuMs, type BenchFigure, type BenchSuite } from './bench.ts';
 import { gp, seededRandom } from '../reference/oracles.ts';
 import { upolyRationalRoots } from '../../src/exact/rational-roots.ts';
 import { upolyRealRootIntervals } from '../../src/exact/root-isolation.ts';
@@ -18,31 +18,7 @@ import { gcd, gcdBigInt, gcdEuclid, gcdLargeKernel } from '../../src/exact/gcd.t
 import { upolyGcd, upolyGcdSubresultant, upolyMul, upolyResultant, upolySquarefreeFactorisation, type UPoly } from '../../src/exact/upoly.ts';
 import { ratToString } from '../../src/exact/rational.ts';
 
-/**
- * Median CPU time in ms of one call of fn (process.cpuUsage, µs resolution): PARI's gettime() is CPU time
- * too, so the ratio is like for like even when other work shares the machine. Each of `reps` samples runs
- * fn repeatedly for at least `minMs` of CPU time.
- */
-function medianMs(fn: () => unknown, reps = 5, warm = 1, minMs = 10): number {
-  const cpu = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
-  for (let i = 0; i < warm; i++) fn();
-  const samples: number[] = [];
-  for (let r = 0; r < reps; r++) {
-    const t0 = cpu();
-    let n = 0;
-    let t = t0;
-    do {
-      fn();
-      n++;
-      t = cpu();
-    } while (t - t0 < minMs);
-    samples.push((t - t0) / n);
-  }
-  return median(samples);
-}
+const medianMs = medianCpuMs;
 
 function digitsExactly(rand: () => number, digits: number): bigint {
   let s = String(1 + Math.floor(rand() * 9));
