@@ -3,8 +3,8 @@
 //
 // Canonical form: every point returned is a primitive integer triple with first non-zero entry positive
 // (src/plane/point.ts), so the same point comes out whatever route computed it. Formulas are fully
-// projective (Silverman–Tate, Rational Points on Elliptic Curves, ch. I; Cassels, Lectures on Elliptic
-// Curves, ch. 7): expanding F(λP + μQ) = λ³F(P) + λ²μ Q·∇F(P) + λμ² P·∇F(Q) + μ³F(Q) gives the third
+// projective (Silverman–Tate, Rational Points on Elliptic Curves, ch. I; Cassels, LMS Student Texts 24,
+// ch. 7): expanding F(λP + μQ) = λ³F(P) + λ²μ Q·∇F(P) + λμ² P·∇F(Q) + μ³F(Q) gives the third
 // root directly, with no special case for points at infinity.
 import { Degenerate, InvalidInput, NotOnCurve, SingularPoint } from '../exact/errors.ts';
 import { bigAbs, content, primitive } from '../exact/integer.ts';

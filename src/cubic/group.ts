@@ -2,7 +2,7 @@
 //
 // Canonical form: points are primitive integer triples (src/plane/point.ts), so equal group elements are
 // equal arrays whatever path computed them. Law (Silverman–Tate, Rational Points on Elliptic Curves,
-// I.2; Cassels, Lectures on Elliptic Curves, ch. 7): P + Q = O * (P * Q), −P = P * (O * O). Associativity
+// I.2; Cassels, LMS Student Texts 24, ch. 7): P + Q = O * (P * Q), −P = P * (O * O). Associativity
 // for a non-flex O is the Cayley–Bacharach theorem, so nothing here needs O to be a flex.
 //
 // Changing the base point from O to O2: the map P ↦ P + O2 (law with base O) carries the law with base O

@@ -1,6 +1,6 @@
 // The Weierstrass model of a smooth plane cubic from a rational point O (flex or not), with both maps.
 //
-// Construction (MATH.md; Cassels, Lectures on Elliptic Curves, ch. 8: Riemann–Roch with L(2O), L(3O)).
+// Construction (MATH.md; Cassels, LMS Student Texts 24, ch. 8: Riemann–Roch with L(2O), L(3O)).
 // T is the tangent at O.
 // - O a flex: x = L/T, y = M/T with L ≠ T through O and M not through O; the forward map is linear.
 // - O not a flex: O' = O * O, T' the tangent at O'; x = L'/T with L' through O' (neither through O nor
