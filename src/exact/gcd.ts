@@ -104,25 +104,16 @@ function gcdLehmer(u: bigint, v: bigint): bigint {
 }
 
 export function gcd(a: bigint, b: bigint): bigint {
-  if (a < 0n) a = -a;
-  if (b < 0n) b = -b;
-  if (a < b) {
-    const t = a;
-    a = b;
-    b = t;
-  }
-  if (b === 0n) return a;
-  if (a < TWO53N) return BigInt(gcdSmall(Number(a), Number(b)));
-  if (a < LEHMER_FROM) return gcdEuclidSorted(a, b);
-  if (a >= GMP_FROM && b >= LEHMER_FROM) {
-    if (gmp === undefined) gmp = gcdGmpKernel();
-    if (gmp) return gmp(a, b);
-  }
-  return gcdLehmer(a, b);
+  return gcdWith(a, b, true);
 }
 
 /** The BigInt kernel alone (doubles, Euclid, Lehmer; never GMP): the fallback, tested against the GMP path. */
 export function gcdBigInt(a: bigint, b: bigint): bigint {
+  return gcdWith(a, b, false);
+}
+
+// The size dispatch shared by both faces: doubles, then Euclid, then GMP (when allowed and loaded), then Lehmer.
+function gcdWith(a: bigint, b: bigint, allowGmp: boolean): bigint {
   if (a < 0n) a = -a;
   if (b < 0n) b = -b;
   if (a < b) {
@@ -133,6 +124,10 @@ export function gcdBigInt(a: bigint, b: bigint): bigint {
   if (b === 0n) return a;
   if (a < TWO53N) return BigInt(gcdSmall(Number(a), Number(b)));
   if (a < LEHMER_FROM) return gcdEuclidSorted(a, b);
+  if (allowGmp && a >= GMP_FROM && b >= LEHMER_FROM) {
+    if (gmp === undefined) gmp = gcdGmpKernel();
+    if (gmp) return gmp(a, b);
+  }
   return gcdLehmer(a, b);
 }
 
