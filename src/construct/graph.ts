@@ -143,6 +143,36 @@ export function constructionUpdate(
   return { ...doc, objects };
 }
 
+/** Stroke widths (CSS pixels) a style may carry: thin enough to read a figure, never zero. */
+export const STYLE_WIDTH_MIN = 0.5;
+export const STYLE_WIDTH_MAX = 8;
+
+/** Restyle one object. The patch is checked (colour "#rrggbb", width within bounds, stroke and width only on
+ * curves and lines, since points show their status by shape); a patch that changes nothing returns `doc`
+ * itself, so a store commit of it adds no undo step. */
+export function constructionStyle(doc: ConstructionDoc, id: ObjectId, style: Partial<Style>): ConstructionDoc {
+  const obj = constructionObject(doc, id);
+  if (!obj) throw new InvalidInput(`no object "${id}"`, 'id');
+  if (style.colour !== undefined && !/^#[0-9a-fA-F]{6}$/.test(style.colour)) {
+    throw new InvalidInput(`a colour is written #rrggbb, found "${style.colour}"`, 'style.colour');
+  }
+  const stroked = obj.type === 'curve' || obj.type === 'line';
+  if (style.stroke !== undefined) {
+    if (!stroked) throw new InvalidInput(`"${obj.label}" is a ${obj.type}: only curves and lines have a stroke pattern`, 'style.stroke');
+    if (!['solid', 'dashed', 'dotted'].includes(style.stroke)) throw new InvalidInput(`unknown stroke pattern "${style.stroke}"`, 'style.stroke');
+  }
+  if (style.width !== undefined) {
+    if (!stroked) throw new InvalidInput(`"${obj.label}" is a ${obj.type}: only curves and lines have a stroke width`, 'style.width');
+    if (!Number.isFinite(style.width) || style.width < STYLE_WIDTH_MIN || style.width > STYLE_WIDTH_MAX) {
+      throw new InvalidInput(`a stroke width is between ${STYLE_WIDTH_MIN} and ${STYLE_WIDTH_MAX} pixels, found ${style.width}`, 'style.width');
+    }
+  }
+  const keys = Object.keys(style) as (keyof Style)[];
+  if (keys.every((k) => style[k] === undefined || style[k] === obj.style[k])) return doc;
+  const defined = Object.fromEntries(keys.filter((k) => style[k] !== undefined).map((k) => [k, style[k]])) as Partial<Style>;
+  return constructionUpdate(doc, id, { style: defined });
+}
+
 /** Give `id` a new construction of the same object type. Refused when it would make a cycle (a new parent
  * built from `id`); the objects are then re-ordered so parents come first. */
 export function constructionRedefine(doc: ConstructionDoc, id: ObjectId, construction: Construction): ConstructionDoc {
