@@ -62,7 +62,9 @@ export function chordPartnerMake(f: Form, s: Point): ChordPartner {
 export function chordPartnerThirdRaw(c: ChordPartner, x: readonly bigint[]): bigint[] {
   const [x0, x1, x2] = x;
   const q = c.quadratic;
-  const b = q[0] * x0 * x0 + q[1] * x0 * x1 + q[2] * x0 * x2 + q[3] * x1 * x1 + q[4] * x1 * x2 + q[5] * x2 * x2;
+  // Horner in the rows of the quadratic form: three products of big coordinates instead of six (the
+  // q_k are small, so the inner sums cost little).
+  const b = x0 * (q[0] * x0 + q[1] * x1 + q[2] * x2) + x1 * (q[3] * x1 + q[4] * x2) + x2 * (q[5] * x2);
   const a = dot(x, c.gradient);
   const s = c.point;
   const r = [a * x0 - b * s[0], a * x1 - b * s[1], a * x2 - b * s[2]];
