@@ -1,9 +1,12 @@
-// The curve panel: type an equation (errors marked at their column), build a curve from points, choose
-// the active curve, and read its report (smooth or not, singular points, components, invariants, flexes).
+// The curve panel: type an equation (errors marked at their column), type a line (a:b:c or a linear
+// equation), build a curve from points, choose the active curve, and read its report (smooth or not,
+// singular points, components, invariants, flexes).
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, state } from 'lit/decorators.js';
 import { StoreController } from '@nanostores/lit';
-import { NinefoldError, ParseError } from '../../exact/errors.ts';
+import { InvalidInput, NinefoldError, ParseError } from '../../exact/errors.ts';
+import { pointParse, pointToString } from '../../plane/parse-point.ts';
+import type { Line } from '../../plane/point.ts';
 import { formParse } from '../../poly/parse.ts';
 import { formToText } from '../../poly/print.ts';
 import { constructionAdd, constructionObject } from '../../construct/graph.ts';
@@ -37,6 +40,9 @@ export class NfCurvePanel extends LitElement {
       dl { display: grid; grid-template-columns: max-content 1fr; gap: 3px 10px; margin: 6px 0 0; }
       dt { color: var(--ink-soft); }
       dd { margin: 0; min-width: 0; overflow-wrap: anywhere; }
+      form.line { margin-top: 6px; }
+      input.ln { flex: 1; min-width: 0; font-family: 'DejaVu Sans Mono', monospace; }
+      input.ln[aria-invalid='true'] { border-color: var(--fails); background: #fff4f1; }
       .swatch { display: inline-block; width: 10px; height: 10px; border-radius: 2px; margin-right: 4px; vertical-align: -1px; }
     `,
   ];
@@ -44,6 +50,7 @@ export class NfCurvePanel extends LitElement {
   private readonly doc = new StoreController(this, $doc);
   private readonly values = new StoreController(this, $values);
   @state() private error: { message: string; column: number; text: string } | null = null;
+  @state() private lineError: { message: string; column: number; text: string } | null = null;
 
   protected override render(): unknown {
     const doc = this.doc.value;
@@ -68,6 +75,24 @@ export class NfCurvePanel extends LitElement {
         ? html`<pre class="caret" aria-hidden="true">${this.error.text}
 ${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
             <p class="error" id="eq-error" role="alert">At column ${this.error.column}: ${this.error.message}</p>`
+        : nothing}
+      <form class="line" @submit=${this.submitLine} aria-label="New line from its equation">
+        <input
+          class="ln"
+          name="line"
+          aria-label="Line a:b:c or ax + by + c = 0"
+          placeholder="Line a:b:c or ax + by + c = 0"
+          aria-invalid=${this.lineError ? 'true' : 'false'}
+          aria-describedby="line-error"
+          @keydown=${(e: KeyboardEvent) => e.stopPropagation()}
+          @input=${() => (this.lineError = null)}
+        />
+        <button type="submit">Add line</button>
+      </form>
+      ${this.lineError
+        ? html`<pre class="caret" aria-hidden="true">${this.lineError.text}
+${' '.repeat(Math.max(0, this.lineError.column - 1))}^</pre>
+            <p class="error line-error" id="line-error" role="alert">At column ${this.lineError.column}: ${this.lineError.message}</p>`
         : nothing}
       <div class="build" aria-label="Curves from the selected points">
         <button @click=${() => this.fromPoints('conic-through-five', 5)} title="Select five points first">Conic through 5</button>
@@ -115,6 +140,25 @@ ${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
     }
   }
 
+  private submitLine(e: Event): void {
+    e.preventDefault();
+    const input = (e.currentTarget as HTMLFormElement).elements.namedItem('line') as HTMLInputElement;
+    const text = input.value;
+    try {
+      const at = lineTextParse(text);
+      const r = constructionAdd(this.doc.value, { construction: { kind: 'line-equation', parents: [], params: { at: pointToString(at) } } });
+      docCommit(r.doc);
+      $selection.set([r.id]);
+      this.lineError = null;
+      input.value = '';
+      noticeShow('done', `${constructionObject(r.doc, r.id)?.label}: the line ${at.join(':')} added.`, 'equation');
+    } catch (err) {
+      if (err instanceof ParseError) this.lineError = { message: err.message, column: err.column, text };
+      else if (err instanceof NinefoldError) this.lineError = { message: err.message, column: 1, text };
+      else throw err;
+    }
+  }
+
   private fromPoints(kind: ConstructionKind, n: number): void {
     const doc = this.doc.value;
     const sel = $selection.get().filter((id) => constructionObject(doc, id)?.type === 'point');
@@ -133,4 +177,26 @@ ${' '.repeat(Math.max(0, this.error.column - 1))}^</pre>
       else throw err;
     }
   }
+}
+
+/** A typed line: coefficients "a:b:c" (rationals allowed; the line aX + bY + cZ = 0) or a linear equation
+ * in x, y (or X, Y, Z). Anything of another degree is refused, naming its degree. */
+function lineTextParse(text: string): Line {
+  const t = text.trim();
+  if (t.includes(':') && !t.includes('=')) {
+    if (t.split(':').length !== 3) throw new ParseError(`expected three coefficients a:b:c, found ${t.split(':').length}`, 1, 'line');
+    try {
+      return pointParse(t, 'line');
+    } catch (err) {
+      // pointParse speaks of points; all-zero coefficients are the one shape error left for a line.
+      if (err instanceof ParseError || !(err instanceof InvalidInput)) throw err;
+      throw new InvalidInput('all three coefficients are zero, and 0:0:0 is no line', 'line');
+    }
+  }
+  const { form } = formParse(text, 'line');
+  if (form.degree !== 1) {
+    throw new InvalidInput(`not a line: this equation has degree ${form.degree}; a line is ax + by + c = 0 (or a:b:c)`, 'line');
+  }
+  // Degree-1 monomials in the order X, Y, Z (src/poly/form.ts), so the coefficients are a:b:c as they stand.
+  return pointParse(form.coeffs.map(String).join(':'), 'line');
 }
