@@ -13,6 +13,7 @@ import { gcd } from '../exact/gcd.ts';
 import type { Form } from '../poly/form.ts';
 import { dot, tripleIsZero, type Point } from '../plane/point.ts';
 import { Degenerate } from '../exact/errors.ts';
+import { content } from '../exact/integer.ts';
 import { cubicGradientAt, cubicGradientForms, divideCube } from './chord.ts';
 
 export interface ChordPartner {
@@ -60,6 +61,29 @@ export function chordPartnerMake(f: Form, s: Point): ChordPartner {
  * non-zero integer triple on f). Degenerate when the line XS lies inside the curve.
  */
 export function chordPartnerThirdRaw(c: ChordPartner, x: readonly bigint[]): bigint[] {
+  return partnerThird(c, x).r;
+}
+
+/**
+ * X * S as the canonical primitive triple, the same as triple() of chordPartnerThirdRaw(c, x) (internal
+ * tier, as chordPartnerThirdRaw), with a small gcd in place of a full one. Why: with R = aX − bS = k³r
+ * and k = content(S × X), S × r = (a/k²)·m with m = (S × X)/k primitive, so a/k² is an integer and
+ * content(r) divides content(S × r) = |a/k²|, about a third the size of r: content(r) = gcd(a/k², r).
+ */
+export function chordPartnerThirdPoint(c: ChordPartner, x: readonly bigint[]): Point {
+  const { r, a, k } = partnerThird(c, x);
+  const k2 = k * k;
+  const h = k2 === 0n ? 0n : a / k2;
+  // h = 0 (no hint: content skips zeros) when the division by k³ fell back to primitive (r is then
+  // primitive already, and a/k² need not be an integer).
+  const g = content([h !== 0n && h * k2 === a ? h : 0n, r[0], r[1], r[2]]);
+  const first = r[0] !== 0n ? r[0] : r[1] !== 0n ? r[1] : r[2];
+  const s = first < 0n ? -g : g;
+  return s === 1n ? [r[0], r[1], r[2]] : [r[0] / s, r[1] / s, r[2] / s];
+}
+
+// Assumes as chordPartnerThirdRaw. r is the triple chordThirdRaw gives, a = X·∇F(S), k = content(S × X).
+function partnerThird(c: ChordPartner, x: readonly bigint[]): { r: bigint[]; a: bigint; k: bigint } {
   const [x0, x1, x2] = x;
   const q = c.quadratic;
   // Horner in the rows of the quadratic form: three products of big coordinates instead of six (the
@@ -71,5 +95,6 @@ export function chordPartnerThirdRaw(c: ChordPartner, x: readonly bigint[]): big
   if (tripleIsZero(r)) {
     throw new Degenerate('the line through the two points lies inside the curve, so it has no third point', 'P, Q');
   }
-  return divideCube(r, gcd(dot(c.l2, x), dot(c.l3, x)));
+  const k = gcd(dot(c.l2, x), dot(c.l3, x));
+  return { r: divideCube(r, k), a, k };
 }

@@ -5,12 +5,12 @@
 import { describe, expect, it } from 'vitest';
 import { randomBigInt, seededRandom } from '../../reference/oracles.ts';
 import { randomPoint, randomSmoothCubicThrough } from './group-samples.ts';
-import { chordPartnerMake, chordPartnerThirdRaw } from '../../../src/cubic/chord-partner.ts';
+import { chordPartnerMake, chordPartnerThirdPoint, chordPartnerThirdRaw } from '../../../src/cubic/chord-partner.ts';
 import { chordThirdRaw } from '../../../src/cubic/chord.ts';
 import { groupMake, groupMultipleIn } from '../../../src/cubic/group.ts';
 import { content } from '../../../src/exact/integer.ts';
 import { gcd } from '../../../src/exact/gcd.ts';
-import { cross, dot, tripleProportional, type Point } from '../../../src/plane/point.ts';
+import { cross, dot, triple, tripleProportional, type Point } from '../../../src/plane/point.ts';
 
 describe('chordPartnerThirdRaw', () => {
   it('equals chordThirdRaw(f, X, S) entry for entry, X primitive or scaled', () => {
@@ -54,5 +54,31 @@ describe('chordPartnerThirdRaw', () => {
         expect(gcd(dot(c.l2, x), dot(c.l3, x)), info).toBe(content(cross(t, x)));
       }
     }
+  });
+
+  it('chordPartnerThirdPoint is the primitive triple of chordThirdRaw, X primitive, scaled or negated', () => {
+    // Scaled X makes the division by k³ fall back to a full primitive (R carries k² only), so both branches run.
+    let checked = 0;
+    for (let seed = 51; seed <= 80; seed++) {
+      const rand = seededRandom(seed);
+      const pts = [randomPoint(rand, 1), randomPoint(rand, 1), randomPoint(rand, 1)];
+      const f = randomSmoothCubicThrough(rand, pts, 1);
+      const g = groupMake(f, pts[0]);
+      for (const s of [pts[0], pts[1]]) {
+        const c = chordPartnerMake(f, s);
+        for (let n = 1; n <= 10; n++) {
+          const x0 = groupMultipleIn(g, pts[2], BigInt(n));
+          if (tripleProportional(x0, s)) continue;
+          const k = (randomBigInt(rand, 3) || 1n) * (rand() < 0.5 ? -1n : 1n);
+          for (const x of [x0, x0.map((v) => v * k), x0.map((v) => -v)]) {
+            const info = `seed ${seed}, n ${n}, f = ${f.coeffs.join(',')}, S = ${s}, X = ${x}`;
+            const r = chordThirdRaw(f, x, s);
+            expect(chordPartnerThirdPoint(c, x), info).toEqual(triple(r[0], r[1], r[2]));
+            checked++;
+          }
+        }
+      }
+    }
+    expect(checked).toBeGreaterThan(1000);
   });
 });
