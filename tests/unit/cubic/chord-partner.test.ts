@@ -81,4 +81,19 @@ describe('chordPartnerThirdRaw', () => {
     }
     expect(checked).toBeGreaterThan(1000);
   });
+
+  it('prepares a unimodular M = (ℓ1; ℓ2; ℓ3) with MS = e1 and its inverse, for seeded S and coordinate points', () => {
+    const f = randomSmoothCubicThrough(seededRandom(90), [[0n, 0n, 1n]], 1);
+    const rand = seededRandom(91);
+    const ss: Point[] = [[0n, 0n, 1n], [0n, 1n, 0n], [1n, 0n, 0n], [3n, 0n, -2n], [0n, 5n, -7n]];
+    for (let k = 0; k < 40; k++) ss.push(randomPoint(rand, 4));
+    for (const s of ss) {
+      const c = chordPartnerMake(f, s);
+      const m = [c.l1, c.l2, c.l3];
+      expect(m.map((l) => dot(l, s)), `S = ${s}`).toEqual([1n, 0n, 0n]);
+      for (let i = 0; i < 3; i++) {
+        for (let j = 0; j < 3; j++) expect(dot(m[i], c.inverse[j]), `S = ${s}, ℓ${i + 1}·w${j + 1}`).toBe(i === j ? 1n : 0n);
+      }
+    }
+  });
 });
