@@ -159,6 +159,27 @@ export function tangentThirdRaw(f: Form, p: readonly bigint[], name = 'P'): bigi
   const gd = cubicGradientAt(f, d);
   const fd = dot(d, gd) / 3n;
   const pd = dot(p, gd);
+  if (i >= 0 && fd !== 0n) {
+    // d_i = 0, so r_i = fd·p_i and r_i/|p_i|³ = ±fd/p_i²: one smaller checked division for that entry.
+    const w = bigAbs(p[i]);
+    const w2 = w * w;
+    const phi = fd / w2;
+    if (phi * w2 === fd) {
+      const w3 = w2 * w;
+      const q: bigint[] = [0n, 0n, 0n];
+      let exact = true;
+      for (let j = 0; j < 3 && exact; j++) {
+        if (j === i) {
+          q[j] = p[i] < 0n ? -phi : phi;
+          continue;
+        }
+        const e = fd * p[j] - pd * d[j];
+        q[j] = e / w3;
+        exact = q[j] * w3 === e;
+      }
+      if (exact) return q;
+    }
+  }
   const r = [fd * p[0] - pd * d[0], fd * p[1] - pd * d[1], fd * p[2] - pd * d[2]];
   if (tripleIsZero(r)) {
     throw new Degenerate(`the tangent line at ${name} lies inside the curve, so it has no third point`, name);
