@@ -35,14 +35,9 @@ export function cubicGradientAt(f: Form, p: readonly bigint[]): [bigint, bigint,
   }
   // Degree-2 monomial order of form.ts: X², XY, XZ, Y², YZ, Z².
   const [x, y, z] = p;
-  const m = [x * x, x * y, x * z, y * y, y * z, z * z];
-  const ev = (g: Form) => {
-    const c = g.coeffs;
-    let s = 0n;
-    for (let k = 0; k < 6; k++) if (c[k] !== 0n) s += c[k] * m[k];
-    return s;
-  };
-  return [ev(fx), ev(fy), ev(fz)];
+  const m0 = x * x, m1 = x * y, m2 = x * z, m3 = y * y, m4 = y * z, m5 = z * z;
+  const ev = (c: readonly bigint[]) => c[0] * m0 + c[1] * m1 + c[2] * m2 + c[3] * m3 + c[4] * m4 + c[5] * m5;
+  return [ev(fx.coeffs), ev(fy.coeffs), ev(fz.coeffs)];
 }
 
 /** F at an integer triple for a cubic: Euler's identity 3F(P) = P·∇F(P) reuses the gradient. */
