@@ -18,17 +18,7 @@ import { pointsCollinear } from '../../src/plane/incidence.ts';
 import { lineLineMeet, pointPointJoin, triple, tripleProportional, type Point } from '../../src/plane/point.ts';
 import { Degenerate, SingularPoint } from '../../src/exact/errors.ts';
 import { gp, gpVector, seededRandom } from './oracles.ts';
-
-function randomPoints(rand: () => number, n: number, size: number): Point[] {
-  const out: Point[] = [];
-  while (out.length < n) {
-    const c = [0, 1, 2].map(() => BigInt(Math.floor(rand() * (2 * size + 1)) - size));
-    if (c.every((v) => v === 0n)) continue;
-    const p = triple(c[0], c[1], c[2]);
-    if (!out.some((q) => tripleProportional(p, q))) out.push(p);
-  }
-  return out;
-}
+import { randomPoints } from './pari-cubic-helpers.ts';
 
 /** ((p1*p2)*(p3*p4)) * ((p5*p6)*(p7*p8)) on the first member F1 + λF2 (λ = 0, 1, −1, 2, …) smooth at every point used. */
 function chordNinth(pencil: readonly Form[], p: readonly Point[]): Point | null {

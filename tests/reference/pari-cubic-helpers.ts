@@ -62,7 +62,7 @@ meet(F, G, n, seed) = {
 hess(F) = matdet(matrix(3, 3, i, j, deriv(deriv(F, v[i]), v[j])));
 `;
 
-export function randomPoints(rand: () => number, n: number, size: number): Point[] {
+export function randomPoints(rand: () => number, n: number, size = 9): Point[] {
   const out: Point[] = [];
   while (out.length < n) {
     const c = [0, 1, 2].map(() => BigInt(Math.floor(rand() * (2 * size + 1)) - size));

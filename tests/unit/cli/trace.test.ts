@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { argsParse } from '../../../src/cli/args.ts';
 import { trace } from '../../../src/cli/verbs/trace.ts';
-import { NinefoldError } from '../../../src/exact/errors.ts';
+import { whereOf } from './where-of.ts';
 
 type TraceOut = { polylines: number[][]; closed: boolean[]; dots: number[][]; ends: unknown[]; ms: number; landmarks: { shear: string } };
 const run = (argv: string[]): TraceOut => trace.run(argsParse(argv, new Set(trace.switches))) as TraceOut;
@@ -41,15 +41,7 @@ describe('trace verb', () => {
     expect(out.polylines.length).toBe(4);
   });
   it('refuses a bad view, bad pixels and a bad equation with the place named', () => {
-    const where = (argv: string[]): string => {
-      try {
-        run(argv);
-      } catch (e) {
-        if (e instanceof NinefoldError) return e.where;
-        throw e;
-      }
-      return 'no error';
-    };
+    const where = (argv: string[]): string => whereOf(() => run(argv));
     expect(where(['x^2 + y^2 = 1', '--view', '1,2,3'])).toBe('--view');
     expect(where(['x^2 + y^2 = 1', '--view', '1,2,0,3'])).toBe('--view');
     expect(where(['x^2 + y^2 = 1', '--view', 'a,2,3,4'])).toBe('--view');

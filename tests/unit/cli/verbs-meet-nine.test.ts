@@ -4,20 +4,10 @@ import { argsParse } from '../../../src/cli/args.ts';
 import { meet } from '../../../src/cli/verbs/meet.ts';
 import { ninth } from '../../../src/cli/verbs/ninth.ts';
 import { nine } from '../../../src/cli/verbs/nine.ts';
-import { NinefoldError } from '../../../src/exact/errors.ts';
+import { whereOf } from './where-of.ts';
 
 const run = (verb: { run: (a: ReturnType<typeof argsParse>) => unknown }, argv: string[], switches: string[] = []) =>
   verb.run(argsParse(argv, new Set(switches))) as Record<string, unknown>;
-
-function whereOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof NinefoldError) return e.where;
-    throw e;
-  }
-  throw new Error('expected an error');
-}
 
 describe('meet verb', () => {
   it('a tangent line and its third point, with the contract fields', () => {

@@ -2,19 +2,9 @@
 import { describe, expect, it } from 'vitest';
 import { argsParse } from '../../../src/cli/args.ts';
 import { points } from '../../../src/cli/verbs/points.ts';
-import { NinefoldError } from '../../../src/exact/errors.ts';
+import { whereOf } from './where-of.ts';
 
 const run = (argv: string[]) => points.run(argsParse(argv, new Set(points.switches ?? []))) as Record<string, unknown>;
-
-function whereOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof NinefoldError) return e.where;
-    throw e;
-  }
-  throw new Error('expected an error');
-}
 
 describe('points verb', () => {
   it('lists the points of height <= H by height, complete, on y^2 + y = x^3 - 2x + 1', () => {

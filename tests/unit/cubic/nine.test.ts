@@ -5,20 +5,9 @@ import { formAdd, formEval, formScale } from '../../../src/poly/form.ts';
 import { InvalidInput } from '../../../src/exact/errors.ts';
 import { triple, tripleProportional, type Point } from '../../../src/plane/point.ts';
 import { seededRandom } from '../../reference/oracles.ts';
+import { randomPoints } from '../../reference/pari-cubic-helpers.ts';
 
 const P = (x: number, y: number, z = 1): Point => triple(BigInt(x), BigInt(y), BigInt(z));
-
-function randomPoints(rand: () => number, n: number, size = 9): Point[] {
-  const out: Point[] = [];
-  while (out.length < n) {
-    const p = [0, 1, 2].map(() => BigInt(Math.floor(rand() * (2 * size + 1)) - size));
-    if (p.every((c) => c === 0n)) continue;
-    const t = triple(p[0], p[1], p[2]);
-    if (out.some((q) => tripleProportional(q, t))) continue;
-    out.push(t);
-  }
-  return out;
-}
 
 describe('ninthPoint', () => {
   it('is a base point of the pencil: on both generators, on random members, and the ninth meet point (seed 9, 25 sets)', () => {
